@@ -1,0 +1,39 @@
+import Link from "next/link";
+import type { ReactNode } from "react";
+import { SignOutButton } from "@/components/ui/sign-out-button";
+import { Wordmark } from "@/components/ui/logo";
+import { can, roleLabels } from "@/lib/roles";
+import { requirePageUser } from "@/lib/server/guard";
+
+export default async function SignedInLayout({ children }: { children: ReactNode }) {
+  const user = await requirePageUser();
+  const links = [
+    { href: "/", label: "Home", show: true },
+    { href: "/projects", label: "Projects", show: can(user.role, "projects:read") },
+    { href: "/admin/users", label: "Users", show: can(user.role, "users:manage") },
+  ].filter((l) => l.show);
+  return (
+    <div className="min-h-screen">
+      <header className="border-b border-tin-rule bg-paper-card/80 print:hidden">
+        <div className="mx-auto flex max-w-[1600px] items-center gap-6 px-5 py-2.5">
+          <Link href="/" aria-label="Stopwright home"><Wordmark /></Link>
+          <nav aria-label="Main" className="flex gap-1 text-sm">
+            {links.map((l) => (
+              <Link key={l.href} href={l.href} className="rounded px-2.5 py-1 text-ink-soft hover:bg-paper-deep hover:text-ink">
+                {l.label}
+              </Link>
+            ))}
+          </nav>
+          <div className="ml-auto flex items-center gap-3 text-sm">
+            <span className="text-right leading-tight">
+              <span className="block font-medium" data-testid="user-name">{user.name}</span>
+              <span className="block text-xs text-tin" data-testid="user-role">{roleLabels[user.role]}</span>
+            </span>
+            <SignOutButton />
+          </div>
+        </div>
+      </header>
+      <main className="mx-auto max-w-[1600px] px-5 py-6">{children}</main>
+    </div>
+  );
+}

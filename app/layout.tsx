@@ -1,0 +1,32 @@
+import type { Metadata } from "next";
+import localFont from "next/font/local";
+import type { ReactNode } from "react";
+import { Providers } from "./providers";
+import "./globals.css";
+
+// Shipped with the app (from @fontsource-variable); nothing is fetched at build or run time.
+const inter = localFont({ src: "./fonts/inter-latin-wght.woff2", variable: "--font-inter", display: "swap" });
+const serif = localFont({
+  src: [
+    { path: "./fonts/source-serif-4-latin-wght.woff2", style: "normal" },
+    { path: "./fonts/source-serif-4-latin-wght-italic.woff2", style: "italic" },
+  ],
+  variable: "--font-serif",
+  display: "swap",
+});
+
+export const metadata: Metadata = {
+  title: { default: "Stopwright", template: "%s · Stopwright" },
+  description: "Specifications, estimates and tender documents for pipe-organ builders.",
+  icons: { icon: "/favicon.svg" },
+};
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en-GB" className={`${inter.variable} ${serif.variable}`}>
+      <body className="min-h-screen bg-paper text-ink antialiased">
+        <Providers>{children}</Providers>
+      </body>
+    </html>
+  );
+}

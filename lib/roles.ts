@@ -1,0 +1,43 @@
+/**
+ * Roles and what each may do: the one map every server boundary checks (lib/server/guard.ts).
+ * The UI may hide what a role cannot do, but never relies on hiding.
+ */
+export const roles = ["admin", "designer", "estimator", "workshop", "client"] as const;
+export type Role = (typeof roles)[number];
+
+export const roleLabels: Record<Role, string> = {
+  admin: "Administrator",
+  designer: "Tonal director",
+  estimator: "Estimator",
+  workshop: "Workshop",
+  client: "Committee member",
+};
+
+export const permissions = [
+  "users:manage",
+  "firm:manage",
+  "projects:create",
+  "projects:read",
+  "projects:edit",
+  "schemes:edit",
+  "schemes:read",
+  "estimate:read",
+  "money:read",
+  "rates:manage",
+  "quotes:issue",
+  "notes:write",
+] as const;
+export type Permission = (typeof permissions)[number];
+
+const grants: Record<Role, readonly Permission[]> = {
+  admin: permissions,
+  designer: ["projects:create", "projects:read", "projects:edit", "schemes:edit", "schemes:read", "estimate:read", "money:read", "notes:write"],
+  estimator: ["projects:read", "schemes:read", "estimate:read", "money:read", "rates:manage", "quotes:issue", "notes:write"],
+  workshop: ["projects:read", "schemes:read", "estimate:read", "notes:write"],
+  // Clients see only shared schemes of their own projects, and never rates or margins.
+  client: ["projects:read", "schemes:read"],
+};
+
+export function can(role: Role, permission: Permission): boolean {
+  return grants[role].includes(permission);
+}

@@ -1,0 +1,31 @@
+import { z } from "zod";
+import { roles } from "@/lib/roles";
+
+/** One schema for the admin form (react-hook-form) and the server. */
+export const newUserSchema = z.object({
+  name: z.string().trim().min(1, "Enter the person's name.").max(120, "Keep the name under 120 characters."),
+  email: z.string().trim().toLowerCase().email("Enter a valid e-mail address."),
+  role: z.enum(roles, { error: "Choose a role." }),
+  password: z.string().min(10, "Use at least 10 characters.").max(200, "Keep the password under 200 characters."),
+});
+export type NewUserInput = z.infer<typeof newUserSchema>;
+
+export const updateUserSchema = z
+  .object({
+    name: z.string().trim().min(1).max(120).optional(),
+    role: z.enum(roles, { error: "Choose a role." }).optional(),
+    disabled: z.boolean().optional(),
+  })
+  .refine((v) => v.name !== undefined || v.role !== undefined || v.disabled !== undefined, "Nothing to change.");
+export type UpdateUserInput = z.infer<typeof updateUserSchema>;
+
+export const signInSchema = z.object({
+  email: z.string().trim().toLowerCase().email("Enter a valid e-mail address."),
+  password: z.string().min(1, "Enter your password."),
+});
+
+/** Messages the sign-in form shows; next-auth passes a thrown error's message through as `error`. */
+export const signInErrors = {
+  credentials: "That e-mail and password do not match an account.",
+  disabled: "This account has been disabled. Ask your administrator.",
+} as const;

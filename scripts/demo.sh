@@ -1,0 +1,29 @@
+#!/usr/bin/env bash
+# npm run demo: everything from a fresh machine to the product on http://127.0.0.1:3000.
+# Run again, it keeps the data (the demo cluster lives in .data/pg).
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/setup.sh
+
+ensure_apt postgresql
+ensure_node_modules
+
+bash scripts/db.sh start
+export DATABASE_URL=$(bash scripts/db.sh url)
+export NEXTAUTH_URL=http://127.0.0.1:3000
+mkdir -p .data
+[ -f .data/demo-secret ] || node -e "console.log(require('crypto').randomBytes(32).toString('hex'))" > .data/demo-secret
+export NEXTAUTH_SECRET=$(cat .data/demo-secret)
+
+node_modules/.bin/tsx scripts/migrate.ts
+node_modules/.bin/tsx db/seed.ts
+node_modules/.bin/next build
+
+cat <<TXT
+
+Stopwright is running on http://127.0.0.1:3000  (Ctrl-C stops it; the data stays)
+Demo accounts (invented people of an invented firm):
+$(node_modules/.bin/tsx -e 'import("./db/demo-accounts").then(m => m.demoAccounts.forEach(a => console.log("  " + a.role.padEnd(10) + a.email.padEnd(32) + a.password)))')
+
+TXT
+exec node_modules/.bin/next start -H 127.0.0.1 -p 3000

@@ -1,0 +1,22 @@
+#!/usr/bin/env bash
+# Shared set-up for the demo and the tests: Debian packages when missing, then node_modules.
+#   source scripts/setup.sh; ensure_apt pkg…; ensure_node_modules
+export NEXT_TELEMETRY_DISABLED=1
+
+ensure_apt() {
+  local missing=()
+  for pkg in "$@"; do dpkg -s "$pkg" >/dev/null 2>&1 || missing+=("$pkg"); done
+  [ ${#missing[@]} -eq 0 ] && return 0
+  echo "installing Debian packages: ${missing[*]}"
+  if [ "$(id -u)" != 0 ]; then echo "error: need root (or sudo) to apt-get install ${missing[*]}" >&2; return 1; fi
+  DEBIAN_FRONTEND=noninteractive apt-get update -qq
+  DEBIAN_FRONTEND=noninteractive apt-get install -y -qq --no-install-recommends "${missing[@]}" >/dev/null
+}
+
+# npm ci when node_modules is missing or older than the lock file.
+ensure_node_modules() {
+  if [ ! -d node_modules ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
+    echo "installing npm packages (npm ci)…"
+    npm ci --no-audit --no-fund --loglevel=error
+  fi
+}
