@@ -4,7 +4,11 @@ import typescript from "eslint-config-next/typescript";
 const config = [
   ...coreWebVitals,
   ...typescript,
-  { ignores: [".next/**", ".next-test/**", "next-env.d.ts", ".data/**", "test-results/**", "playwright-report/**"] },
+  {
+    // `_name` marks a value taken apart on purpose and left unused.
+    rules: { "@typescript-eslint/no-unused-vars": ["warn", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_" }] },
+  },
+  { ignores: [".next/**", ".next-test/**", ".next-dev-test/**", "next-env.d.ts", ".data/**", "test-results/**", "playwright-report/**"] },
 ];
 
 export default config;

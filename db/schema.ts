@@ -1,6 +1,11 @@
 import { sql } from "drizzle-orm";
-import { boolean, check, pgEnum, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import {
+  boolean, check, date, doublePrecision, foreignKey, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp,
+  uniqueIndex, uuid, type AnyPgColumn,
+} from "drizzle-orm/pg-core";
 import { roles } from "../lib/roles";
+import { schemeStatuses } from "../lib/spec/document";
+import { projectStatuses } from "../lib/spec/projects";
 
 export const roleEnum = pgEnum("role", roles);
 
@@ -36,3 +41,122 @@ export const users = pgTable(
 export type Firm = typeof firms.$inferSelect;
 export type User = typeof users.$inferSelect;
 export type NewUser = typeof users.$inferInsert;
+
+// ── Projects, schemes and their contents ───────────────────────────────────────────────────────
+
+export const projectStatusEnum = pgEnum("project_status", projectStatuses);
+export const schemeStatusEnum = pgEnum("scheme_status", schemeStatuses);
+
+/** One instrument job for one client. */
+export const projects = pgTable(
+  "projects",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    name: text("name").notNull(),
+    clientName: text("client_name").notNull(),
+    venue: text("venue").notNull().default(""),
+    location: text("location").notNull().default(""),
+    instrument: text("instrument").notNull().default(""),
+    status: projectStatusEnum("status").notNull().default("enquiry"),
+    targetDate: date("target_date"),
+    /** A4 in Hz (ISO 16: 440). */
+    pitchHz: doublePrecision("pitch_hz").notNull().default(440),
+    /** Design temperature of the building in °C, for the speed of sound. */
+    temperatureC: doublePrecision("temperature_c").notNull().default(18),
+    notes: text("notes").notNull().default(""),
+    archivedAt: timestamp("archived_at", { withTimezone: true }),
+    createdById: uuid("created_by_id").references(() => users.id),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [check("projects_pitch_range", sql`${t.pitchHz} between 380 and 480`)],
+);
+
+/** Who belongs to a project: the firm's people on it, and the client's committee members. */
+export const projectMembers = pgTable(
+  "project_members",
+  {
+    projectId: uuid("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    addedAt: timestamp("added_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.projectId, t.userId] })],
+);
+
+/** An alternative specification of a project; `version` guards against overwriting someone's save. */
+export const schemes = pgTable(
+  "schemes",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    projectId: uuid("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    description: text("description").notNull().default(""),
+    status: schemeStatusEnum("status").notNull().default("draft"),
+    /** Opened to the project's client members (the committee); false until the firm shares it. */
+    sharedWithClient: boolean("shared_with_client").notNull().default(false),
+    version: integer("version").notNull().default(1),
+    copiedFromId: uuid("copied_from_id").references((): AnyPgColumn => schemes.id, { onDelete: "set null" }),
+    accessories: jsonb("accessories").notNull().default({}),
+    updatedById: uuid("updated_by_id").references(() => users.id),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("schemes_project_idx").on(t.projectId)],
+);
+
+/**
+ * Divisions and stops keep the editor's own ids (unique within a scheme) and a fractional
+ * position key, so a move rewrites only the moved row's key, never the whole list. Their other
+ * properties live in `props` (validated by the scheme model in lib/estimate/scheme.ts on every
+ * save), so adding a stop property needs no migration.
+ */
+export const divisions = pgTable(
+  "divisions",
+  {
+    schemeId: uuid("scheme_id").notNull().references(() => schemes.id, { onDelete: "cascade" }),
+    id: text("id").notNull(),
+    position: text("position").notNull(),
+    name: text("name").notNull(),
+    props: jsonb("props").notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.schemeId, t.id] }), index("divisions_order_idx").on(t.schemeId, t.position)],
+);
+
+export const stops = pgTable(
+  "stops",
+  {
+    schemeId: uuid("scheme_id").notNull().references(() => schemes.id, { onDelete: "cascade" }),
+    id: text("id").notNull(),
+    divisionId: text("division_id").notNull(),
+    position: text("position").notNull(),
+    name: text("name").notNull(),
+    treatment: text("treatment").notNull(),
+    props: jsonb("props").notNull(),
+  },
+  (t) => [
+    primaryKey({ columns: [t.schemeId, t.id] }),
+    foreignKey({ columns: [t.schemeId, t.divisionId], foreignColumns: [divisions.schemeId, divisions.id] }).onDelete("cascade"),
+    index("stops_order_idx").on(t.schemeId, t.divisionId, t.position),
+  ],
+);
+
+/** Every saved change keeps a restorable snapshot of the whole document. */
+export const schemeRevisions = pgTable(
+  "scheme_revisions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    schemeId: uuid("scheme_id").notNull().references(() => schemes.id, { onDelete: "cascade" }),
+    version: integer("version").notNull(),
+    document: jsonb("document").notNull(),
+    note: text("note").notNull().default(""),
+    authorId: uuid("author_id").references(() => users.id),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("scheme_revisions_version_key").on(t.schemeId, t.version)],
+);
+
+export type Project = typeof projects.$inferSelect;
+export type Scheme = typeof schemes.$inferSelect;
+export type DivisionRow = typeof divisions.$inferSelect;
+export type StopRow = typeof stops.$inferSelect;
+export type SchemeRevision = typeof schemeRevisions.$inferSelect;

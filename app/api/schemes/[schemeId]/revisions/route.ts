@@ -1,0 +1,6 @@
+import { listRevisions } from "@/db/queries/schemes";
+import { route } from "@/lib/server/guard";
+
+export const GET = route<undefined, { schemeId: string }>({ permission: "schemes:read" }, async ({ user, params }) => ({
+  revisions: await listRevisions({ user, schemeId: params.schemeId }),
+}));

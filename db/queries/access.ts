@@ -1,0 +1,40 @@
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import { db, type Tx } from "@/db/client";
+import { projectMembers, projects, schemes, type Project, type Scheme } from "@/db/schema";
+import { AppError } from "@/lib/server/errors";
+import type { SessionUser } from "@/lib/server/guard";
+
+/**
+ * Who may see what: the firm's people see every project of the firm; a client sees only projects
+ * they are a member of, and in them only the schemes shared with the committee. Anything else
+ * answers 404, so a client cannot learn that a project exists.
+ */
+export async function loadProjectFor({ user, projectId, tx = db }: { user: SessionUser; projectId: string; tx?: Tx | typeof db }): Promise<Project> {
+  if (!isUuid(projectId)) throw new AppError("not_found", "No such project.");
+  const [project] = await tx.select().from(projects).where(eq(projects.id, projectId)).limit(1);
+  if (!project) throw new AppError("not_found", "No such project.");
+  if (user.role === "client") {
+    const [member] = await tx
+      .select({ userId: projectMembers.userId })
+      .from(projectMembers)
+      .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.userId, user.id)))
+      .limit(1);
+    if (!member) throw new AppError("not_found", "No such project.");
+  }
+  return project;
+}
+
+export async function loadSchemeFor({ user, schemeId, tx = db, lock = false }: { user: SessionUser; schemeId: string; tx?: Tx | typeof db; lock?: boolean }): Promise<{ scheme: Scheme; project: Project }> {
+  if (!isUuid(schemeId)) throw new AppError("not_found", "No such scheme.");
+  const query = tx.select().from(schemes).where(eq(schemes.id, schemeId)).limit(1);
+  const [scheme] = lock ? await query.for("update") : await query;
+  if (!scheme) throw new AppError("not_found", "No such scheme.");
+  const project = await loadProjectFor({ user, projectId: scheme.projectId, tx });
+  if (user.role === "client" && !scheme.sharedWithClient) throw new AppError("not_found", "No such scheme.");
+  return { scheme, project };
+}
+
+export function isUuid(value: string): boolean {
+  return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
+}

@@ -1,0 +1,69 @@
+/**
+ * The scheme document the editor edits and the API saves: the estimator's scheme model
+ * (lib/estimate/scheme.ts) without the tuning, which belongs to the project, plus a description.
+ * Pure: shared by the browser (forms, live figures) and the server (validation before saving).
+ */
+import { z } from "zod";
+import { accessoriesSchema, divisionSchema, type SchemeInput } from "@/lib/estimate/scheme";
+
+export const schemeStatuses = ["draft", "proposed", "preferred", "accepted", "withdrawn"] as const;
+export type SchemeStatus = (typeof schemeStatuses)[number];
+
+export const schemeDocumentSchema = z.object({
+  name: z.string().trim().min(1, "Give the scheme a name.").max(120),
+  description: z.string().max(4000).default(""),
+  divisions: z.array(divisionSchema).default([]),
+  accessories: accessoriesSchema.prefault({}),
+});
+export type SchemeDocumentInput = z.input<typeof schemeDocumentSchema>;
+export type SchemeDocument = z.output<typeof schemeDocumentSchema>;
+export type DocDivision = SchemeDocument["divisions"][number];
+export type DocStop = DocDivision["stops"][number];
+
+export const saveSchemeSchema = z.object({
+  /** The version the edit was based on; a stale one is refused with 409. */
+  version: z.number().int().min(1),
+  document: schemeDocumentSchema,
+  /** Optional words for the revision list ("moved the Trompette to the Swell"). */
+  note: z.string().max(200).optional(),
+});
+
+export type Tuning = { pitchHz: number; temperatureC: number };
+
+/** What GET /api/schemes/:id answers (and PUT on success). */
+export type SchemeRead = {
+  id: string;
+  projectId: string;
+  name: string;
+  description: string;
+  status: SchemeStatus;
+  sharedWithClient: boolean;
+  version: number;
+  copiedFromId: string | null;
+  updatedAt: string;
+  updatedByName: string | null;
+  tuning: Tuning;
+  document: SchemeDocument;
+};
+
+/** The estimator's input for a document under a project's tuning. */
+export function toEstimatorScheme(doc: SchemeDocument, tuning: Tuning): SchemeInput {
+  return {
+    name: doc.name,
+    tuning: { pitchHz: tuning.pitchHz, temperatureC: tuning.temperatureC, mutations: "tempered" },
+    divisions: doc.divisions,
+    accessories: doc.accessories,
+  };
+}
+
+export const newSchemeSchema = z.object({
+  name: z.string().trim().min(1, "Give the scheme a name.").max(120),
+  description: z.string().max(4000).default(""),
+  /** Optional starting document (e.g. an imported scheme file); empty otherwise. */
+  document: z.unknown().optional(),
+});
+export const duplicateSchemeSchema = z.object({ name: z.string().trim().min(1, "Give the copy a name.").max(120) });
+export const schemeMetaSchema = z
+  .object({ status: z.enum(schemeStatuses).optional(), sharedWithClient: z.boolean().optional() })
+  .refine((v) => v.status !== undefined || v.sharedWithClient !== undefined, "Nothing to change.");
+export const restoreSchema = z.object({ version: z.number().int().min(1) });

@@ -1,0 +1,65 @@
+/** Project shapes shared by forms, the API and the pages. Pure. */
+import { z } from "zod";
+import type { SchemeStatus } from "./document";
+
+export const projectStatuses = ["enquiry", "design", "tender", "contracted", "workshop", "site", "complete"] as const;
+export type ProjectStatus = (typeof projectStatuses)[number];
+export const projectStatusLabels: Record<ProjectStatus, string> = {
+  enquiry: "Enquiry",
+  design: "Design",
+  tender: "Tender",
+  contracted: "Contracted",
+  workshop: "In the workshop",
+  site: "On site",
+  complete: "Complete",
+};
+
+export const projectInputSchema = z.object({
+  name: z.string().trim().min(1, "Give the project a name.").max(160),
+  clientName: z.string().trim().min(1, "Name the client (church, school, hall…).").max(160),
+  venue: z.string().trim().max(160).default(""),
+  location: z.string().trim().max(160).default(""),
+  instrument: z.string().trim().max(300).default(""),
+  status: z.enum(projectStatuses).default("enquiry"),
+  /** ISO date (YYYY-MM-DD) or null. */
+  targetDate: z.iso.date("Use a date like 2028-09-30.").nullable().default(null),
+  pitchHz: z.number({ error: "Pitch is a number in Hz." }).min(380, "Pitch below 380 Hz is not supported.").max(480, "Pitch above 480 Hz is not supported.").default(440),
+  temperatureC: z.number({ error: "Temperature is a number in °C." }).min(-10).max(40).default(18),
+  notes: z.string().max(4000).default(""),
+});
+export type ProjectInput = z.input<typeof projectInputSchema>;
+export const projectPatchSchema = projectInputSchema.partial();
+
+export type ProjectSummary = {
+  id: string;
+  name: string;
+  clientName: string;
+  venue: string;
+  location: string;
+  instrument: string;
+  status: ProjectStatus;
+  targetDate: string | null;
+  archived: boolean;
+  schemeCount: number;
+  updatedAt: string;
+};
+
+export type ProjectMember = { id: string; name: string; email: string; role: string };
+
+export type ProjectRead = ProjectSummary & { pitchHz: number; temperatureC: number; notes: string; members: ProjectMember[] };
+
+export type SchemeSummary = {
+  id: string;
+  name: string;
+  description: string;
+  status: SchemeStatus;
+  sharedWithClient: boolean;
+  version: number;
+  copiedFromId: string | null;
+  updatedAt: string;
+  stopCount: number;
+  divisionCount: number;
+};
+
+export const archiveSchema = z.object({ archived: z.boolean() });
+export const memberSchema = z.object({ email: z.string().trim().toLowerCase().email("Enter a valid e-mail address.") });

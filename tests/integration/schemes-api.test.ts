@@ -1,0 +1,153 @@
+import { afterAll, describe, expect, it } from "vitest";
+import { smallDocument } from "../support/fixtures";
+import { api, closeTestDb, makeUser, signIn, testDb } from "../support/server";
+
+afterAll(closeTestDb);
+
+async function setUp() {
+  const designer = await makeUser("designer");
+  const cookie = await signIn(designer);
+  const project = (await api("/api/projects", { method: "POST", cookie, body: { name: "Scheme tests", clientName: "Invented parish" } })).json.project;
+  const created = await api(`/api/projects/${project.id}/schemes`, { method: "POST", cookie, body: { name: "Scheme A", document: smallDocument() } });
+  expect(created.status).toBe(201);
+  return { designer, cookie, project, scheme: created.json.scheme };
+}
+
+async function revisionCount(schemeId: string) {
+  const { rows } = await testDb().query("select count(*)::int as n from scheme_revisions where scheme_id = $1", [schemeId]);
+  return rows[0].n as number;
+}
+
+describe("schemes API", () => {
+  it("creates a scheme with its divisions and stops in order, as version 1 with a revision", async () => {
+    const { scheme, project } = await setUp();
+    expect(scheme).toMatchObject({ projectId: project.id, name: "Scheme A", version: 1, status: "draft", sharedWithClient: false });
+    expect(scheme.document.divisions.map((d: { name: string }) => d.name)).toEqual(["Great", "Pedal"]);
+    expect(scheme.document.divisions[0].stops.map((s: { name: string }) => s.name)).toEqual(["Open Diapason", "Principal", "Twelfth", "Fifteenth"]);
+    // Defaults of the scheme model are filled in and kept.
+    expect(scheme.document.divisions[0].stops[2]).toMatchObject({ footage: "2 2/3", ranks: 1, treatment: "new", construction: "open" });
+    expect(await revisionCount(scheme.id)).toBe(1);
+  });
+
+  it("saves a move with the version it was based on; only the moved stop's position changes", async () => {
+    const { scheme, cookie } = await setUp();
+    const before = await testDb().query("select id, division_id, position from stops where scheme_id = $1 order by id", [scheme.id]);
+    const doc = structuredClone(scheme.document);
+    const [twelfth] = doc.divisions[0].stops.splice(2, 1);
+    doc.divisions[1].stops.unshift(twelfth); // to the Pedal, first
+    const saved = await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: doc, note: "moved the Twelfth" } });
+    expect(saved.status).toBe(200);
+    expect(saved.json.scheme.version).toBe(2);
+    expect(saved.json.scheme.document.divisions[1].stops.map((s: { name: string }) => s.name)).toEqual(["Twelfth", "Bourdon", "Bass Flute"]);
+    const after = await testDb().query("select id, division_id, position from stops where scheme_id = $1 order by id", [scheme.id]);
+    const changed = after.rows.filter((r, i) => r.position !== before.rows[i].position || r.division_id !== before.rows[i].division_id);
+    expect(changed.map((r) => r.id)).toEqual(["gt-12"]);
+    const reread = await api(`/api/schemes/${scheme.id}`, { cookie });
+    expect(reread.json.scheme.document).toEqual(saved.json.scheme.document);
+  });
+
+  it("answers 409 to a stale version with the current scheme, and overwrites nothing", async () => {
+    const { scheme, cookie } = await setUp();
+    const other = await signIn(await makeUser("designer"));
+    const first = structuredClone(scheme.document);
+    first.divisions[0].stops[0].name = "Large Open Diapason";
+    expect((await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie: other, body: { version: 1, document: first } })).status).toBe(200);
+
+    const second = structuredClone(scheme.document);
+    second.divisions[0].stops[0].name = "Small Open Diapason";
+    const res = await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: second } });
+    expect(res.status).toBe(409);
+    expect(res.json.error.code).toBe("conflict");
+    expect(res.json.error.message).toMatch(/saved version 2/);
+    expect(res.json.error.details.current.version).toBe(2);
+    expect(res.json.error.details.current.document.divisions[0].stops[0].name).toBe("Large Open Diapason");
+    expect(await revisionCount(scheme.id)).toBe(2);
+  });
+
+  it("refuses a bad document with 422 messages naming division and stop, and saves nothing", async () => {
+    const { scheme, cookie } = await setUp();
+    const doc = structuredClone(scheme.document);
+    doc.divisions[0].stops[1].ranks = 0;
+    doc.divisions[1].stops[1].source = "no-such-stop";
+    doc.divisions[1].compass.high = "z";
+    const res = await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: doc } });
+    expect(res.status).toBe(422);
+    const messages = Object.values(res.json.error.fields).flat() as string[];
+    expect(Object.keys(res.json.error.fields)).toEqual(expect.arrayContaining(["document.divisions.0.stops.1.ranks", "document.divisions.1.compass.high"]));
+    expect(messages.some((m) => m.startsWith('Division "Great", stop "Principal"'))).toBe(true);
+    expect(messages.some((m) => m.startsWith('Division "Pedal"'))).toBe(true);
+
+    const refs = structuredClone(scheme.document);
+    refs.divisions[1].stops[1].source = "no-such-stop";
+    const res2 = await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: refs } });
+    expect(res2.status).toBe(422);
+    expect(res2.json.error.fields["document.divisions.1.stops.1.source"][0]).toMatch(/^Division "Pedal", stop "Bass Flute".*not in this scheme/);
+
+    const reread = await api(`/api/schemes/${scheme.id}`, { cookie });
+    expect(reread.json.scheme.version).toBe(1);
+    expect(reread.json.scheme.document).toEqual(scheme.document);
+    expect(await revisionCount(scheme.id)).toBe(1);
+  });
+
+  it("lets estimators and workshop read but not save; clients see nothing until shared", async () => {
+    const { scheme, cookie, project } = await setUp();
+    for (const role of ["estimator", "workshop"] as const) {
+      const c = await signIn(await makeUser(role));
+      expect((await api(`/api/schemes/${scheme.id}`, { cookie: c })).status, role).toBe(200);
+      expect((await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie: c, body: { version: 1, document: scheme.document } })).status, role).toBe(403);
+    }
+    const client = await makeUser("client");
+    const clientCookie = await signIn(client);
+    await api(`/api/projects/${project.id}/members`, { method: "POST", cookie, body: { email: client.email } });
+    expect((await api(`/api/schemes/${scheme.id}`, { cookie: clientCookie })).status).toBe(404);
+    expect((await api(`/api/projects/${project.id}`, { cookie: clientCookie })).json.schemes).toEqual([]);
+    const shared = await api(`/api/schemes/${scheme.id}`, { method: "PATCH", cookie, body: { sharedWithClient: true } });
+    expect(shared.json.scheme.sharedWithClient).toBe(true);
+    expect((await api(`/api/schemes/${scheme.id}`, { cookie: clientCookie })).status).toBe(200);
+    expect((await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie: clientCookie, body: { version: 1, document: scheme.document } })).status).toBe(403);
+  });
+
+  it("keeps every revision and restores an earlier one as a new version", async () => {
+    const { scheme, cookie } = await setUp();
+    const doc = structuredClone(scheme.document);
+    doc.divisions[0].stops.pop();
+    const v2 = (await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: doc, note: "no Fifteenth" } })).json.scheme;
+    expect(v2.document.divisions[0].stops).toHaveLength(3);
+
+    const list = await api(`/api/schemes/${scheme.id}/revisions`, { cookie });
+    expect(list.json.revisions.map((r: { version: number; note: string }) => [r.version, r.note])).toEqual([[2, "no Fifteenth"], [1, "created"]]);
+    expect(list.json.revisions[0].authorName).toBe("Test designer");
+    const one = await api(`/api/schemes/${scheme.id}/revisions/1`, { cookie });
+    expect(one.json.revision.document.divisions[0].stops).toHaveLength(4);
+    expect((await api(`/api/schemes/${scheme.id}/revisions/9`, { cookie })).status).toBe(404);
+
+    expect((await api(`/api/schemes/${scheme.id}/revisions/1/restore`, { method: "POST", cookie, body: { version: 1 } })).status).toBe(409);
+    const restored = await api(`/api/schemes/${scheme.id}/revisions/1/restore`, { method: "POST", cookie, body: { version: 2 } });
+    expect(restored.status).toBe(200);
+    expect(restored.json.scheme.version).toBe(3);
+    expect(restored.json.scheme.document).toEqual(scheme.document);
+    expect(await revisionCount(scheme.id)).toBe(3);
+  });
+
+  it("duplicates a scheme into an independent copy that remembers its source", async () => {
+    const { scheme, cookie, project } = await setUp();
+    const copy = await api(`/api/schemes/${scheme.id}/duplicate`, { method: "POST", cookie, body: { name: "Scheme B" } });
+    expect(copy.status).toBe(201);
+    expect(copy.json.scheme).toMatchObject({ name: "Scheme B", version: 1, copiedFromId: scheme.id });
+    expect(copy.json.scheme.document.divisions).toEqual(scheme.document.divisions);
+    const doc = structuredClone(copy.json.scheme.document);
+    doc.divisions[0].stops = [];
+    await api(`/api/schemes/${copy.json.scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: doc } });
+    const original = await api(`/api/schemes/${scheme.id}`, { cookie });
+    expect(original.json.scheme.document.divisions[0].stops).toHaveLength(4);
+    const listed = await api(`/api/projects/${project.id}`, { cookie });
+    expect(listed.json.schemes.map((s: { name: string; stopCount: number }) => [s.name, s.stopCount])).toEqual([["Scheme A", 6], ["Scheme B", 2]]);
+  });
+
+  it("answers 404 for a scheme that does not exist and 400 for a body that is not JSON", async () => {
+    const { scheme, cookie } = await setUp();
+    expect((await api("/api/schemes/00000000-0000-4000-8000-000000000000", { cookie })).status).toBe(404);
+    const bad = await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: "{not json" });
+    expect(bad.status).toBe(400);
+  });
+});
