@@ -1,0 +1,164 @@
+// The invented demo scenario: an invented parish, its invented organ and two alternative schemes.
+// Every name, place and figure here is made up for the demo.
+import type { SchemeDocumentInput } from "../lib/spec/document";
+
+type StopIn = SchemeDocumentInput["divisions"] extends (infer D)[] | undefined ? (D extends { stops?: (infer S)[] } ? S : never) : never;
+
+function stop(id: string, name: string, footage: string, family: StopIn["family"], more: Partial<StopIn> = {}): StopIn {
+  return { id, name, footage, family, ...more };
+}
+
+const manual = { keyboard: "manual" as const, compass: { low: "C", high: "c''''" } };
+const pedal = { keyboard: "pedal" as const, compass: { low: "C", high: "f'" } };
+
+/** Scheme A: the 1908 two-manual organ of St Aldric's restored much as it stands. */
+export const restoreScheme: SchemeDocumentInput = {
+  name: "A — Restore as found",
+  description: "Clean and restore the existing two-manual organ; pneumatic action converted to electro-pneumatic; no tonal change. (Invented demo scheme.)",
+  divisions: [
+    {
+      id: "gt", name: "Great", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 89, unit: "mm" },
+      consoleDistanceM: 6, space: { lengthMm: 3400, depthMm: 1500 }, chestWork: "restored",
+      stops: [
+        stop("gt-od", "Open Diapason", "8", "principal", { treatment: "restored", scale: { offsetHt: 2 } }),
+        stop("gt-cl", "Clarabella", "8", "flute", { treatment: "restored", construction: "open", material: "pine" }),
+        stop("gt-du", "Dulciana", "8", "string", { treatment: "restored", scale: { offsetHt: -4 } }),
+        stop("gt-pr", "Principal", "4", "principal", { treatment: "restored" }),
+        stop("gt-hf", "Harmonic Flute", "4", "flute", { treatment: "restored" }),
+        stop("gt-15", "Fifteenth", "2", "principal", { treatment: "restored" }),
+        stop("gt-tr", "Trumpet", "8", "reed", { treatment: "revoiced", construction: "reed-full" }),
+      ],
+    },
+    {
+      id: "sw", name: "Swell", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 95, unit: "mm" },
+      enclosed: true, consoleDistanceM: 9, space: { lengthMm: 3000, depthMm: 1400 }, chestWork: "restored",
+      stops: [
+        stop("sw-ob", "Open Diapason", "8", "principal", { treatment: "restored" }),
+        stop("sw-lg", "Lieblich Gedackt", "8", "flute", { treatment: "restored", construction: "stopped", material: "pine" }),
+        stop("sw-sa", "Salicional", "8", "string", { treatment: "restored", scale: { offsetHt: -6 } }),
+        stop("sw-vc", "Voix Céleste", "8", "string", { treatment: "restored", scale: { offsetHt: -6 }, compass: { low: "c", high: "c''''" } }),
+        stop("sw-ge", "Gemshorn", "4", "principal", { treatment: "restored", construction: "conical" }),
+        stop("sw-mx", "Mixture", "1 1/3", "mixture", { treatment: "restored", ranks: 3, breaks: [
+          { from: "C", footages: ["1 1/3", "1", "2/3"] },
+          { from: "c'", footages: ["2 2/3", "2", "1 1/3"] },
+        ] }),
+        stop("sw-cb", "Cornopean", "8", "reed", { treatment: "restored", construction: "reed-full" }),
+        stop("sw-ob2", "Oboe", "8", "reed", { treatment: "restored", construction: "reed-full" }),
+      ],
+    },
+    {
+      id: "ped", name: "Pedal", ...pedal, action: "electro-pneumatic", chest: "pitman", chestLayout: "chromatic",
+      windPressure: { value: 100, unit: "mm" }, consoleDistanceM: 12, space: { lengthMm: 4200, depthMm: 1000 }, chestWork: "restored", passageBoard: false,
+      stops: [
+        stop("ped-bd", "Bourdon", "16", "flute", { treatment: "restored", construction: "stopped", material: "pine" }),
+        stop("ped-bf", "Bass Flute", "8", "flute", { treatment: "extension", source: "ped-bd", construction: "stopped", material: "pine" }),
+      ],
+    },
+  ],
+  accessories: {
+    consoleWork: "restored",
+    couplers: [
+      { id: "sw-gt", from: "sw", to: "gt", octave: 0 },
+      { id: "sw-ped", from: "sw", to: "ped", octave: 0 },
+      { id: "gt-ped", from: "gt", to: "ped", octave: 0 },
+      { id: "sw-oct", from: "sw", to: "sw", octave: 1 },
+    ],
+    tremulants: [{ id: "sw-trem", division: "sw" }],
+    combination: { memoryLevels: 8, generalPistons: 6, divisionalPistons: 4 },
+  },
+};
+
+/** Scheme B: the same organ rebuilt and enlarged with a new Choir and a fuller Pedal. */
+export const enlargeScheme: SchemeDocumentInput = {
+  ...restoreScheme,
+  name: "B — Rebuild and enlarge",
+  description: "Scheme A plus a new enclosed Choir, a Great mixture and new Pedal basses on an enlarged chest. (Invented demo scheme.)",
+  divisions: [
+    {
+      ...restoreScheme.divisions![0]!,
+      stops: [
+        ...restoreScheme.divisions![0]!.stops!.slice(0, 6),
+        stop("gt-12", "Twelfth", "2 2/3", "mutation"),
+        stop("gt-mx", "Mixture", "1 1/3", "mixture", { ranks: 4, breaks: [
+          { from: "C", footages: ["1 1/3", "1", "2/3", "1/2"] },
+          { from: "c", footages: ["2", "1 1/3", "1", "2/3"] },
+          { from: "c'", footages: ["2 2/3", "2", "1 1/3", "1"] },
+          { from: "c''", footages: ["4", "2 2/3", "2", "1 1/3"] },
+        ] }),
+        restoreScheme.divisions![0]!.stops![6]!,
+      ],
+    },
+    restoreScheme.divisions![1]!,
+    {
+      id: "ch", name: "Choir", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 75, unit: "mm" },
+      enclosed: true, consoleDistanceM: 8, space: { lengthMm: 2600, depthMm: 1100 },
+      stops: [
+        stop("ch-sd", "Stopped Diapason", "8", "flute", { construction: "stopped", material: "oak" }),
+        stop("ch-dl", "Dulciana", "8", "string", { treatment: "relocated", scale: { offsetHt: -4 } }),
+        stop("ch-cf", "Chimney Flute", "4", "flute", { construction: "half-stopped" }),
+        stop("ch-na", "Nazard", "2 2/3", "mutation", { construction: "half-stopped" }),
+        stop("ch-pi", "Piccolo", "2", "flute"),
+        stop("ch-ti", "Tierce", "1 3/5", "mutation"),
+        stop("ch-cr", "Clarinet", "8", "reed", { construction: "reed-half" }),
+      ],
+    },
+    {
+      ...restoreScheme.divisions![2]!,
+      space: { lengthMm: 4200, depthMm: 1000 },
+      stops: [
+        stop("ped-ow", "Open Wood", "16", "flute", { material: "pine", scale: { offsetHt: 4 }, offsetBassPipes: 0 }),
+        ...restoreScheme.divisions![2]!.stops!,
+        stop("ped-pr", "Principal", "8", "principal", { material: "zinc" }),
+        stop("ped-tb", "Trombone", "16", "reed", { construction: "reed-full", material: "zinc" }),
+        stop("ped-tp", "Trumpet", "8", "reed", { treatment: "extension", source: "ped-tb", construction: "reed-full", material: "zinc" }),
+      ],
+    },
+  ],
+  accessories: {
+    ...restoreScheme.accessories!,
+    consoleWork: "new",
+    couplers: [
+      ...restoreScheme.accessories!.couplers!,
+      { id: "ch-gt", from: "ch", to: "gt", octave: 0 },
+      { id: "ch-ped", from: "ch", to: "ped", octave: 0 },
+      { id: "sw-ch", from: "sw", to: "ch", octave: 0 },
+    ],
+    tremulants: [{ id: "sw-trem", division: "sw" }, { id: "ch-trem", division: "ch" }],
+    combination: { memoryLevels: 256, generalPistons: 8, divisionalPistons: 6 },
+  },
+};
+
+export const demoProjects = [
+  {
+    project: {
+      name: "St Aldric's, Wexmoor — organ rebuild",
+      clientName: "Parochial Church Council of St Aldric, Wexmoor (invented)",
+      venue: "St Aldric's Church (invented)",
+      location: "Wexmoor (invented town)",
+      instrument: "Two-manual organ of 1908 by an unrecorded builder, pneumatic action (invented)",
+      status: "design" as const,
+      targetDate: "2028-09-30",
+      pitchHz: 440,
+      temperatureC: 15,
+      notes: "Committee wants a decision by Easter. Gallery access by fixed ladder only: plan lifting. (Invented.)",
+    },
+    schemes: [restoreScheme, enlargeScheme],
+    shared: [true, true],
+  },
+  {
+    project: {
+      name: "Hallam Grove School chapel — new organ",
+      clientName: "Hallam Grove School (invented)",
+      venue: "School chapel (invented)",
+      location: "Carrow Vale (invented town)",
+      instrument: "New two-manual organ, mechanical action (invented)",
+      status: "enquiry" as const,
+      targetDate: null,
+      pitchHz: 440,
+      temperatureC: 18,
+      notes: "",
+    },
+    schemes: [] as SchemeDocumentInput[],
+    shared: [] as boolean[],
+  },
+];
