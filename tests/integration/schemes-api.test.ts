@@ -151,3 +151,28 @@ describe("schemes API", () => {
     expect(bad.status).toBe(400);
   });
 });
+
+describe("GET /api/schemes/:id/estimate", () => {
+  it("estimates the saved scheme; money only for roles that may see it", async () => {
+    const { scheme } = await setUp();
+    const estimator = await signIn(await makeUser("estimator"));
+    const res = await api(`/api/schemes/${scheme.id}/estimate`, { cookie: estimator });
+    expect(res.status).toBe(200);
+    expect(res.json.version).toBe(1);
+    // Great: 4 ranks × 61 notes; Pedal C–g′: Bourdon 32 + the 8′ extension adds the 12 notes above it (common practice).
+    const [great, pedal] = res.json.estimate.divisions;
+    expect(great.pipes.total).toBe(4 * 61);
+    expect(pedal.pipes.total).toBe(32 + 12);
+    expect(typeof res.json.estimate.money.totalAmount).toBe("string");
+
+    const workshop = await signIn(await makeUser("workshop"));
+    const w = await api(`/api/schemes/${scheme.id}/estimate`, { cookie: workshop });
+    expect(w.status).toBe(200);
+    expect(w.json.estimate.money).toBeUndefined();
+    expect(w.text).not.toMatch(/Amount"/);
+    expect(w.json.estimate.divisions[0].hoursTotal).toBe(great.hoursTotal);
+
+    const client = await signIn(await makeUser("client"));
+    expect((await api(`/api/schemes/${scheme.id}/estimate`, { cookie: client })).status).toBe(403);
+  });
+});

@@ -1,0 +1,42 @@
+/**
+ * Pipe diameters from the scale. Töpfer's normal scale: the cross-section changes 1 : √8 per octave,
+ * so the diameter halves on the 17th note (16 semitones); 8′ C = 155.5 mm —
+ * Wikipedia, "Organ flue pipe scaling", citing Adelung, Einführung in den Orgelbau (1991), pp. 85–86.
+ * A scale is an offset in semitones from it ("+2 ht" is two semitones wider) with its own halving
+ * note; every scale pivots on 8′ C (our choice, see docs/estimating-method.md).
+ */
+
+/** Diameter of 8′ C on the normal scale, mm (Adelung via Wikipedia). */
+export const NORMAL_SCALE_8FT_C_MM = 155.5;
+
+export interface ScaleParams {
+  /** Semitones wider (+) or narrower (−) than normal. */
+  readonly offsetHt: number;
+  /** Note (counted from 1) on which the diameter halves; normal 17. */
+  readonly halvingOn: number;
+}
+
+/** Diameter ratio from one semitone to the next: 2^(−1/(halvingOn − 1)). */
+export function diameterRatioPerSemitone(halvingOn: number): number {
+  return Math.pow(2, -1 / (halvingOn - 1));
+}
+
+/**
+ * Diameter in mm of a pipe sounding `semitones` above 8′ C (C2, MIDI 36):
+ * D = 155.5 / 2^((semitones − offsetHt) / (halvingOn − 1)).
+ */
+export function diameterMm(semitonesAbove8ftC: number, scale: ScaleParams): number {
+  return NORMAL_SCALE_8FT_C_MM * Math.pow(2, -(semitonesAbove8ftC - scale.offsetHt) / (scale.halvingOn - 1));
+}
+
+/** Mouth width in mm: a fraction of the circumference (normal ¼ — Wikipedia, op. cit.; Dickson p. 42). */
+export function mouthWidthMm(diameterMm: number, fractionOfCircumference: number): number {
+  return fractionOfCircumference * Math.PI * diameterMm;
+}
+
+/** Inside side in mm of a square wooden pipe with the cross-section of the scaled circle: D·√π/2. */
+export const SQUARE_SIDE_PER_DIAMETER = Math.sqrt(Math.PI) / 2;
+
+export function squareSideMm(diameterMm: number): number {
+  return diameterMm * SQUARE_SIDE_PER_DIAMETER;
+}

@@ -1,0 +1,25 @@
+/**
+ * The estimate of a saved scheme document under its project's tuning: the one call the server and
+ * the editor's live figures share. Pure.
+ */
+import { DEFAULT_RATES, estimateScheme, parseScheme, type Estimate, type Rates } from "@/lib/estimate";
+import { toEstimatorScheme, type SchemeDocument, type Tuning } from "./document";
+
+export type DocumentEstimate = { ok: true; estimate: Estimate } | { ok: false; messages: string[] };
+
+export function estimateDocument(doc: SchemeDocument, tuning: Tuning, rates: Rates = DEFAULT_RATES): DocumentEstimate {
+  if (!doc.divisions.length) return { ok: false, messages: ["Add a division to see figures."] };
+  const parsed = parseScheme(toEstimatorScheme(doc, tuning));
+  if (!parsed.ok) return { ok: false, messages: parsed.messages };
+  return { ok: true, estimate: estimateScheme(parsed.scheme, rates) };
+}
+
+/** What a role without money:read may see: everything but prices, rates and margins. */
+export function withoutMoney(e: Estimate) {
+  const { money: _money, ...rest } = e;
+  return {
+    ...rest,
+    divisions: rest.divisions.map(({ directCostAmount: _d, ...d }) => d),
+    schemeWide: (({ directCostAmount: _s, ...w }) => w)(rest.schemeWide),
+  };
+}
