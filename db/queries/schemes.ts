@@ -31,7 +31,7 @@ async function toRead(tx: Store, scheme: Scheme, project: Project): Promise<Sche
 }
 
 function validated(raw: unknown): SchemeDocument {
-  const check = checkDocument(raw, [], "document.");
+  const check = checkDocument(raw, "document.");
   if (!check.ok) throw new AppError("invalid", "The scheme has problems; nothing was saved.", check.fields);
   return check.document;
 }

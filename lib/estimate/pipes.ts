@@ -11,7 +11,7 @@
  */
 import type { Division, Scheme, Stop } from "./scheme";
 import { compassNoteCount, noteToMidi, parseCompass } from "./notes";
-import { formatFootage, harmonicOf8ft, parseFootage, semitonesAbove8ft, type Fraction } from "./pitch";
+import { formatFootage, harmonicOf8ft, MSG_NOT_FOOTAGE, parseFootage, semitonesAbove8ft, type Fraction } from "./pitch";
 import type { PipeWork } from "./labour";
 
 export type StopKind = "own" | "extension" | "borrowed" | "prepared" | "removed";
@@ -124,7 +124,15 @@ export interface SchemePlan {
   readonly rows: readonly ChestRowPlan[];
   /** Everything inconsistent in the scheme, naming division and stop; empty when the plan is sound. */
   readonly messages: readonly string[];
+  /** The same messages with the path of the field each is about, for forms that show them in place. */
+  readonly issues: readonly PlanIssue[];
 }
+
+export interface PlanIssue {
+  readonly path: readonly (string | number)[];
+  readonly message: string;
+}
+type Say = (path: readonly (string | number)[], message: string) => void;
 
 /** Message prefixes name the division and stop by their names, as the user wrote them. */
 export function where(d: { readonly name: string }, s?: { readonly name: string }): string {
@@ -132,7 +140,6 @@ export function where(d: { readonly name: string }, s?: { readonly name: string 
 }
 
 const footageText = (f: string | number) => (typeof f === "number" ? String(f) : f);
-const MSG_NOT_FOOTAGE = "is not a footage; write a whole number of feet or an exact fraction, e.g. 8, 2 2/3, 1 3/5";
 
 /** Occupancy of sounding semitones (index = semitones above 8′ C + OCC_BASE) for ranks that carry extensions. */
 const OCC_BASE = 96;
@@ -140,7 +147,10 @@ const OCC_SIZE = 256;
 
 /** Resolves a scheme into stops, chest rows and segments of pipes, with pipe counts and messages. */
 export function planScheme(scheme: Scheme): SchemePlan {
-  const messages: string[] = [];
+  const issues: PlanIssue[] = [];
+  const say: Say = (path, message) => issues.push({ path, message });
+  const stopPath = (d: { divisionIndex: number; stop: Stop }, field: string) =>
+    ["divisions", d.divisionIndex, "stops", scheme.divisions[d.divisionIndex].stops.indexOf(d.stop), field];
   const tuning = scheme.tuning.mutations;
   const divisions: DivisionPlan[] = [];
   const segments: Segment[] = [];
@@ -152,36 +162,37 @@ export function planScheme(scheme: Scheme): SchemePlan {
   const drafts: Draft[] = [];
 
   scheme.divisions.forEach((division, di) => {
-    if (divisionIds.has(division.id)) messages.push(`${where(division)}: the id "${division.id}" is used by another division`);
+    if (divisionIds.has(division.id)) say(["divisions", di, "id"], `${where(division)}: the id "${division.id}" is used by another division`);
     divisionIds.add(division.id);
     let c = parseCompass(division.compass);
     if (!c) {
-      messages.push(`${where(division)}: compass ${division.compass.low}–${division.compass.high} is not in note names such as C, c', c''''`);
+      say(["divisions", di, "compass"], `${where(division)}: compass ${division.compass.low}–${division.compass.high} is not in note names such as C, c', c''''`);
       c = { lowMidi: 36, highMidi: 96 };
     } else if (c.lowMidi > c.highMidi) {
-      messages.push(`${where(division)}: compass runs downward (${division.compass.low} to ${division.compass.high}); give the lowest note first`);
+      say(["divisions", di, "compass"], `${where(division)}: compass runs downward (${division.compass.low} to ${division.compass.high}); give the lowest note first`);
     }
     const stopIndexes: number[] = [];
-    division.stops.forEach((stop) => {
+    division.stops.forEach((stop, si) => {
       const index = drafts.length;
       const at = where(division, stop);
-      if (stopById.has(stop.id)) messages.push(`${at}: the id "${stop.id}" is used by another stop`);
+      const sp = (field: string) => ["divisions", di, "stops", si, field];
+      if (stopById.has(stop.id)) say(sp("id"), `${at}: the id "${stop.id}" is used by another stop`);
       else stopById.set(stop.id, index);
       let lowKey = c.lowMidi;
       let highKey = c.highMidi;
       if (stop.compass) {
         const sc = parseCompass(stop.compass);
-        if (!sc) messages.push(`${at}: compass ${stop.compass.low}–${stop.compass.high} is not in note names`);
-        else if (sc.lowMidi > sc.highMidi) messages.push(`${at}: compass runs downward (${stop.compass.low} to ${stop.compass.high}); give the lowest note first`);
+        if (!sc) say(sp("compass"), `${at}: compass ${stop.compass.low}–${stop.compass.high} is not in note names`);
+        else if (sc.lowMidi > sc.highMidi) say(sp("compass"), `${at}: compass runs downward (${stop.compass.low} to ${stop.compass.high}); give the lowest note first`);
         else if (sc.lowMidi < c.lowMidi || sc.highMidi > c.highMidi)
-          messages.push(`${at}: compass ${stop.compass.low}–${stop.compass.high} goes beyond the division's ${division.compass.low}–${division.compass.high}`);
+          say(sp("compass"), `${at}: compass ${stop.compass.low}–${stop.compass.high} goes beyond the division's ${division.compass.low}–${division.compass.high}`);
         else [lowKey, highKey] = [sc.lowMidi, sc.highMidi];
       }
       const footage = parseFootage(stop.footage);
-      if (!footage) messages.push(`${at}: footage "${footageText(stop.footage)}" ${MSG_NOT_FOOTAGE}`);
+      if (!footage) say(sp("footage"), `${at}: footage "${footageText(stop.footage)}" ${MSG_NOT_FOOTAGE}`);
       const f = footage ?? { num: 8, den: 1 };
       const notes = compassNoteCount(lowKey, highKey);
-      if (stop.offsetBassPipes > notes) messages.push(`${at}: ${stop.offsetBassPipes} offset bass pipes, but the stop has only ${notes} notes`);
+      if (stop.offsetBassPipes > notes) say(sp("offsetBassPipes"), `${at}: ${stop.offsetBassPipes} offset bass pipes, but the stop has only ${notes} notes`);
       const kind = kindOf(stop.treatment);
       drafts.push({
         index, divisionIndex: di, stop, kind,
@@ -201,16 +212,16 @@ export function planScheme(scheme: Scheme): SchemePlan {
     const at = where(scheme.divisions[d.divisionIndex], d.stop);
     const label = d.kind === "extension" ? "extension source" : "borrowed source";
     if (!d.stop.source) {
-      messages.push(`${at}: an ${d.kind === "extension" ? "extension" : "borrowed stop"} needs a source stop`);
+      say(stopPath(d, "source"), `${at}: an ${d.kind === "extension" ? "extension" : "borrowed stop"} needs a source stop`);
       continue;
     }
     const src = stopById.get(d.stop.source);
     if (src === undefined) {
-      messages.push(`${at}: ${label} "${d.stop.source}" does not exist`);
+      say(stopPath(d, "source"), `${at}: ${label} "${d.stop.source}" does not exist`);
       continue;
     }
     if (src === d.index) {
-      messages.push(`${at}: a stop cannot draw on itself`);
+      say(stopPath(d, "source"), `${at}: a stop cannot draw on itself`);
       continue;
     }
     let root = src;
@@ -218,7 +229,7 @@ export function planScheme(scheme: Scheme): SchemePlan {
     let broken = false;
     while (drafts[root].kind === "extension" || drafts[root].kind === "borrowed") {
       if (seen.has(root)) {
-        messages.push(`${at}: ${label} "${d.stop.source}" leads round in a circle`);
+        say(stopPath(d, "source"), `${at}: ${label} "${d.stop.source}" leads round in a circle`);
         broken = true;
         break;
       }
@@ -232,11 +243,11 @@ export function planScheme(scheme: Scheme): SchemePlan {
     }
     if (broken) continue;
     if (drafts[root].kind === "removed") {
-      messages.push(`${at}: ${label} "${d.stop.source}" is removed`);
+      say(stopPath(d, "source"), `${at}: ${label} "${d.stop.source}" is removed`);
       continue;
     }
     if (d.kind === "extension" && drafts[root].ranks > 1) {
-      messages.push(`${at}: ${label} "${d.stop.source}" has ${drafts[root].ranks} ranks; an extension draws on a single rank`);
+      say(stopPath(d, "source"), `${at}: ${label} "${d.stop.source}" has ${drafts[root].ranks} ranks; an extension draws on a single rank`);
       continue;
     }
     d.rootIndex = root;
@@ -252,7 +263,7 @@ export function planScheme(scheme: Scheme): SchemePlan {
       continue;
     }
     if (d.kind !== "own" && d.kind !== "prepared") continue;
-    const rankFootages = breakPlan(d, at, tuning, messages);
+    const rankFootages = breakPlan(d, at, tuning, (field, message) => say(stopPath(d, field), message));
     for (let r = 0; r < d.ranks; r++) {
       const row = rows.length;
       rows.push({ division: d.divisionIndex, stop: d.index, rank: r });
@@ -318,19 +329,19 @@ export function planScheme(scheme: Scheme): SchemePlan {
     d.pipes = made ? counts(added, 0, 0, 0, 0) : counts(0, 0, 0, added, 0);
   }
 
-  checkAccessories(scheme, divisionIds, messages);
-  return { divisions, stops: drafts, segments, rows, messages };
+  checkAccessories(scheme, divisionIds, say);
+  return { divisions, stops: drafts, segments, rows, messages: issues.map((i) => i.message), issues };
 }
 
 /** Per rank, the runs of keys with one footage: from the breaks for mixtures, else the stop's footage. */
 function breakPlan(
-  d: StopPlan, at: string, tuning: Scheme["tuning"]["mutations"], messages: string[],
+  d: StopPlan, at: string, tuning: Scheme["tuning"]["mutations"], say: (field: string, message: string) => void,
 ): { fromKey: number; shift: number; footage: Fraction }[][] {
   const plain = () => Array.from({ length: d.ranks }, () => [{ fromKey: d.lowKey, shift: d.shift, footage: d.footage }]);
   const breaks = d.stop.breaks;
   if (!breaks || breaks.length === 0) {
     if (d.ranks > 1 && (d.stop.family === "mixture" || d.stop.family === "mutation"))
-      messages.push(`${at}: a ${d.stop.family} of ${d.ranks} ranks needs breaks giving each rank's footage`);
+      say("breaks", `${at}: a ${d.stop.family} of ${d.ranks} ranks needs breaks giving each rank's footage`);
     return plain();
   }
   const out: { fromKey: number; shift: number; footage: Fraction }[][] = Array.from({ length: d.ranks }, () => []);
@@ -339,20 +350,20 @@ function breakPlan(
   breaks.forEach((b, bi) => {
     const key = noteToMidi(b.from);
     if (key === null) {
-      messages.push(`${at}: break "${b.from}" is not a note name`);
+      say("breaks", `${at}: break "${b.from}" is not a note name`);
       ok = false;
       return;
     }
     if (b.footages.length !== d.ranks) {
-      messages.push(`${at}: the break at ${b.from} gives ${b.footages.length} footages for ${d.ranks} ranks`);
+      say("breaks", `${at}: the break at ${b.from} gives ${b.footages.length} footages for ${d.ranks} ranks`);
       ok = false;
     }
     if (key <= prevKey) {
-      messages.push(`${at}: breaks must go upward; ${b.from} comes after a higher or equal note`);
+      say("breaks", `${at}: breaks must go upward; ${b.from} comes after a higher or equal note`);
       ok = false;
     }
     if (bi > 0 && (key < d.lowKey || key > d.highKey)) {
-      messages.push(`${at}: break at ${b.from} lies outside the stop's compass`);
+      say("breaks", `${at}: break at ${b.from} lies outside the stop's compass`);
       ok = false;
     }
     prevKey = key;
@@ -360,7 +371,7 @@ function breakPlan(
     for (let r = 0; r < Math.min(d.ranks, b.footages.length); r++) {
       const f = parseFootage(b.footages[r]);
       if (!f) {
-        messages.push(`${at}: break at ${b.from}, rank ${r + 1}: footage "${footageText(b.footages[r])}" ${MSG_NOT_FOOTAGE}`);
+        say("breaks", `${at}: break at ${b.from}, rank ${r + 1}: footage "${footageText(b.footages[r])}" ${MSG_NOT_FOOTAGE}`);
         ok = false;
         continue;
       }
@@ -370,15 +381,16 @@ function breakPlan(
   return ok ? out : plain();
 }
 
-function checkAccessories(scheme: Scheme, divisionIds: ReadonlySet<string>, messages: string[]): void {
-  for (const c of scheme.accessories.couplers) {
-    for (const end of [c.from, c.to]) if (!divisionIds.has(end)) messages.push(`Coupler "${c.id}": division "${end}" does not exist`);
-    if (c.from === c.to && c.octave === 0) messages.push(`Coupler "${c.id}": a unison coupler from a division to itself does nothing`);
-  }
-  for (const t of scheme.accessories.tremulants)
-    if (!divisionIds.has(t.division)) messages.push(`Tremulant "${t.id}": division "${t.division}" does not exist`);
+function checkAccessories(scheme: Scheme, divisionIds: ReadonlySet<string>, say: Say): void {
+  scheme.accessories.couplers.forEach((c, ci) => {
+    for (const end of ["from", "to"] as const) if (!divisionIds.has(c[end])) say(["accessories", "couplers", ci, end], `Coupler "${c.id}": division "${c[end]}" does not exist`);
+    if (c.from === c.to && c.octave === 0) say(["accessories", "couplers", ci, "to"], `Coupler "${c.id}": a unison coupler from a division to itself does nothing`);
+  });
+  scheme.accessories.tremulants.forEach((t, ti) => {
+    if (!divisionIds.has(t.division)) say(["accessories", "tremulants", ti, "division"], `Tremulant "${t.id}": division "${t.division}" does not exist`);
+  });
   const p = scheme.programme;
-  if (p?.target && p.target < p.start) messages.push(`Programme: the target date ${p.target} is before the start ${p.start}`);
+  if (p?.target && p.target < p.start) say(["programme", "target"], `Programme: the target date ${p.target} is before the start ${p.start}`);
 }
 
 /** Pipe counts of every stop, by stop id, without geometry. */

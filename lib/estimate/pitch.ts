@@ -46,6 +46,9 @@ function fromDecimalText(text: string): Fraction | null {
  * into an exact fraction. Returns null unless it is a footage: a positive length of at most 64′
  * that divides 64′ a whole number of times (every flue and mutation pitch is 64′/n).
  */
+/** How a footage that is not one is refused, everywhere. */
+export const MSG_NOT_FOOTAGE = "is not a footage; write a whole number of feet or an exact fraction, e.g. 8, 2 2/3, 1 3/5";
+
 export function parseFootage(input: string | number): Fraction | null {
   let f: Fraction | null = null;
   if (typeof input === "number") {

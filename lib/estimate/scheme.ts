@@ -3,6 +3,7 @@
  * (docs/scheme-format.md), the server and the command line. Pure zod, no I/O.
  */
 import { z } from "zod";
+import { MSG_NOT_FOOTAGE, parseFootage } from "./pitch";
 
 /** Helmholtz note names as organ builders write them: C, C#, c, c', c'''' (Wikipedia, "Helmholtz pitch notation"). */
 export const noteName = z
@@ -19,7 +20,9 @@ export const compassSchema = z.object({ low: noteName, high: noteName });
  * A footage as the trade writes it, kept as an exact fraction: "8", "2 2/3", "2⅔", "1 3/5", "10 2/3", "1/2".
  * Numbers are accepted for whole footages.
  */
-export const footageSchema = z.union([z.string().min(1), z.number().positive()]);
+export const footageSchema = z
+  .union([z.string().min(1), z.number().positive()])
+  .refine((f) => parseFootage(f) !== null, { error: (issue) => `"${String(issue.input)}" ${MSG_NOT_FOOTAGE}` });
 
 export const families = ["principal", "flute", "string", "reed", "hybrid", "mutation", "mixture"] as const;
 export const constructions = ["open", "stopped", "half-stopped", "conical", "capped", "reed-full", "reed-half"] as const;

@@ -47,7 +47,7 @@ describe("parseScheme", () => {
   it("reports a footage that is not a footage", () => {
     const s = base();
     s.divisions[0].stops[0].footage = "2.67";
-    expect(messagesOf(s)[0]).toMatch(/^Division "Great", stop "Principal": footage "2.67" is not a footage/);
+    expect(messagesOf(s)[0]).toMatch(/^Division "Great", stop "Principal": footage: "2.67" is not a footage/);
   });
 
   it("reports mixture breaks whose footages do not match the ranks, and a mixture with no breaks", () => {

@@ -6,6 +6,7 @@
  */
 import { schemeSchema, type Scheme } from "./scheme";
 import { planScheme, where } from "./pipes";
+import { MSG_NOT_FOOTAGE } from "./pitch";
 import { DEFAULT_RATES, parseRates, type Rates } from "./rates";
 
 export type ParseResult = { ok: true; scheme: Scheme } | { ok: false; messages: string[] };
@@ -18,16 +19,17 @@ function nameAt(list: unknown, i: number, what: string): { name: string } {
   return { name: typeof item?.name === "string" && item.name ? item.name : `${what} ${i + 1}` };
 }
 
-const FIELD_HINTS: Readonly<Record<string, string>> = {
-  footage: "is not a footage; write a whole number of feet or an exact fraction, e.g. 8, 2 2/3, 1 3/5",
-};
+// zod's own words for a value of the wrong type ("Invalid input") say less than ours.
+const FIELD_HINTS: Readonly<Record<string, string>> = { footage: MSG_NOT_FOOTAGE };
 
-function describe(path: readonly PropertyKey[], message: string, raw: Raw): string {
+/** Words one zod issue of a scheme-shaped input so a person can find it: `Division "Great", stop "X": footage: …`. */
+export function describeIssue(path: readonly PropertyKey[], message: string, raw: unknown): string {
+  const doc = (typeof raw === "object" && raw !== null ? raw : {}) as Raw;
   let prefix = "Scheme";
   let rest = path;
   if (path[0] === "divisions" && typeof path[1] === "number") {
-    const division = nameAt(raw.divisions, path[1], "division");
-    const stops = Array.isArray(raw.divisions) ? raw.divisions[path[1]]?.stops : undefined;
+    const division = nameAt(doc.divisions, path[1], "division");
+    const stops = Array.isArray(doc.divisions) ? doc.divisions[path[1]]?.stops : undefined;
     if (path[2] === "stops" && typeof path[3] === "number") {
       prefix = where(division, nameAt(stops, path[3], "stop"));
       rest = path.slice(4);
@@ -60,8 +62,7 @@ export function parseScheme(input: unknown): ParseResult {
   if ("error" in j) return { ok: false, messages: [j.error] };
   const r = schemeSchema.safeParse(j.value);
   if (!r.success) {
-    const raw = (typeof j.value === "object" && j.value !== null ? j.value : {}) as Raw;
-    return { ok: false, messages: r.error.issues.map((i) => describe(i.path, i.message, raw)) };
+    return { ok: false, messages: r.error.issues.map((i) => describeIssue(i.path, i.message, j.value)) };
   }
   const plan = planScheme(r.data);
   if (plan.messages.length) return { ok: false, messages: [...plan.messages] };

@@ -81,7 +81,7 @@ describe("schemes API", () => {
     refs.divisions[1].stops[1].source = "no-such-stop";
     const res2 = await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: refs } });
     expect(res2.status).toBe(422);
-    expect(res2.json.error.fields["document.divisions.1.stops.1.source"][0]).toMatch(/^Division "Pedal", stop "Bass Flute".*not in this scheme/);
+    expect(res2.json.error.fields["document.divisions.1.stops.1.source"][0]).toBe(`Division "Pedal", stop "Bass Flute": extension source "no-such-stop" does not exist`);
 
     const reread = await api(`/api/schemes/${scheme.id}`, { cookie });
     expect(reread.json.scheme.version).toBe(1);

@@ -1,0 +1,68 @@
+"use client";
+import { useRouter } from "next/navigation";
+import { useState, useTransition } from "react";
+import { api, ApiError } from "@/components/spec/api";
+import { roleLabels, type Role } from "@/lib/roles";
+import type { ProjectMember } from "@/lib/spec/projects";
+
+export function MembersPanel({ projectId, members, mayEdit, selfId }: { projectId: string; members: ProjectMember[]; mayEdit: boolean; selfId: string }) {
+  const router = useRouter();
+  const [email, setEmail] = useState("");
+  const [error, setError] = useState<string | null>(null);
+  const [pending, startTransition] = useTransition();
+
+  function run(fn: () => Promise<unknown>, after?: () => void) {
+    setError(null);
+    startTransition(async () => {
+      try {
+        await fn();
+        after?.();
+        router.refresh();
+      } catch (err) {
+        setError(err instanceof ApiError ? (err.fields?.email?.join(" ") ?? err.message) : "That did not work.");
+      }
+    });
+  }
+
+  return (
+    <section className="panel self-start" aria-labelledby="members-heading">
+      <h2 id="members-heading" className="border-b border-tin-rule px-4 py-3 text-xl font-semibold">Members</h2>
+      <ul className="divide-y divide-tin-rule text-sm" data-testid="members">
+        {members.map((m) => (
+          <li key={m.id} className="flex items-center gap-3 px-4 py-2">
+            <span className="min-w-0 flex-1">
+              <span className="block font-medium">{m.name}{m.id === selfId && <span className="ml-1 text-xs text-tin">(you)</span>}</span>
+              <span className="block truncate text-xs text-tin">{m.email} · {roleLabels[m.role as Role] ?? m.role}</span>
+            </span>
+            {mayEdit && m.id !== selfId && (
+              <button type="button" className="btn py-1 text-xs" disabled={pending} aria-label={`Remove ${m.name} from the project`} onClick={() => run(() => api.removeMember(projectId, m.id))}>
+                Remove
+              </button>
+            )}
+          </li>
+        ))}
+        {members.length === 0 && <li className="px-4 py-3 text-tin">No members yet.</li>}
+      </ul>
+      {mayEdit && (
+        <form
+          className="border-t border-tin-rule px-4 py-3"
+          aria-label="Add a member"
+          noValidate
+          onSubmit={(e) => {
+            e.preventDefault();
+            if (!email.trim()) return setError("Give the member's e-mail.");
+            run(() => api.addMember(projectId, email.trim()), () => setEmail(""));
+          }}
+        >
+          <label className="label" htmlFor="member-email">Add by e-mail</label>
+          <div className="flex gap-2">
+            <input id="member-email" type="email" className="field" value={email} onChange={(e) => setEmail(e.target.value)} aria-invalid={!!error} placeholder="colleague@firm.example" />
+            <button type="submit" className="btn-primary" disabled={pending}>Add</button>
+          </div>
+          {error && <p role="alert" className="field-error"><span aria-hidden="true">✕ </span>{error}</p>}
+          <p className="mt-2 text-xs text-tin">Committee members must first have an account; they see only the schemes shared with them.</p>
+        </form>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,19 @@
+import "server-only";
+import { notFound } from "next/navigation";
+import { getProjectForUser } from "@/db/queries/projects";
+import { getSchemeForUser } from "@/db/queries/schemes";
+import { AppError } from "@/lib/server/errors";
+import type { SessionUser } from "@/lib/server/guard";
+
+/** The scheme and its project for a page, or the 404 page (also when the scheme is not this project's). */
+export async function loadSchemePage(user: SessionUser, projectId: string, schemeId: string) {
+  try {
+    const scheme = await getSchemeForUser({ user, schemeId });
+    if (scheme.projectId !== projectId) notFound();
+    const { project } = await getProjectForUser({ user, projectId });
+    return { scheme, project };
+  } catch (err) {
+    if (err instanceof AppError && (err.code === "not_found" || err.code === "forbidden")) notFound();
+    throw err;
+  }
+}

@@ -1,0 +1,124 @@
+"use client";
+import { SortableContext, useSortable, verticalListSortingStrategy } from "@dnd-kit/sortable";
+import { CSS } from "@dnd-kit/utilities";
+import { StateMark } from "@/components/ui/state-mark";
+import type { DivisionEstimate } from "@/lib/estimate";
+import type { DocDivision } from "@/lib/spec/document";
+import { chestWords, fitState } from "./chest-words";
+import { actionLabels, compassText, formatNumber, windText } from "./format";
+import { DragHandle, StopCard, type StopPipes } from "./stop-card";
+
+/** A swell box: a box with shutters, our mark for an enclosed division. */
+function EnclosedMark() {
+  return (
+    <svg viewBox="0 0 16 16" className="inline-block h-3.5 w-3.5" aria-hidden="true">
+      <rect x="2" y="2.5" width="12" height="11" fill="none" stroke="currentColor" strokeWidth="1.5" />
+      <path d="M4.5 5.5h7M4.5 8h7M4.5 10.5h7" stroke="currentColor" strokeWidth="1.2" />
+    </svg>
+  );
+}
+
+export function DivisionColumn({
+  division,
+  figures,
+  pipesById,
+  editable,
+  activeType,
+  onEditDivision,
+  onAddStop,
+  onEditStop,
+}: {
+  division: DocDivision;
+  figures: DivisionEstimate | undefined;
+  pipesById: Map<string, StopPipes>;
+  editable: boolean;
+  activeType: "stop" | "division" | null;
+  onEditDivision: () => void;
+  onAddStop: () => void;
+  onEditStop: (stopId: string) => void;
+}) {
+  const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging } = useSortable({
+    id: `div:${division.id}`,
+    data: { type: "division", divisionId: division.id },
+    // While a stop is carried, only an empty column takes it as a whole; otherwise its stops do.
+    disabled: editable ? { draggable: false, droppable: activeType === "stop" && division.stops.length > 0 } : true,
+  });
+  const fit = figures?.chest.fit ?? null;
+  const hasChest = (figures?.chest.main.rows ?? 0) > 0;
+  const state = fitState(fit, hasChest);
+  const words = figures ? chestWords(figures.chest.main, figures.chest.space, fit) : "";
+  return (
+    <section
+      ref={setNodeRef}
+      style={{ transform: CSS.Translate.toString(transform), transition }}
+      className={`flex w-72 shrink-0 flex-col rounded-md border bg-paper-deep/60 ${isDragging ? "z-20 border-brass opacity-90 shadow-lg" : state === "clash" ? "border-clash" : "border-tin-rule"}`}
+      data-testid={`division-${division.name}`}
+      data-division-id={division.id}
+      aria-labelledby={`div-title-${division.id}`}
+    >
+      <header className="border-b border-tin-rule px-2.5 pb-2 pt-2">
+        <div className="flex items-center gap-1.5">
+          {editable && <DragHandle label={`Move division ${division.name}`} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />}
+          <h3 id={`div-title-${division.id}`} className="min-w-0 flex-1 truncate text-lg font-semibold">{division.name}</h3>
+          {editable && (
+            <button type="button" className="btn px-2 py-0.5 text-xs" onClick={onEditDivision} aria-label={`Edit division ${division.name}`}>
+              Edit
+            </button>
+          )}
+        </div>
+        <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-2 text-xs text-ink-soft">
+          <dt className="text-tin">Compass</dt>
+          <dd className="num">{compassText(division.compass)}{figures && <span className="text-tin"> · {figures.notes} notes</span>}</dd>
+          <dt className="text-tin">Action</dt>
+          <dd>{actionLabels[division.action]}</dd>
+          <dt className="text-tin">Wind</dt>
+          <dd className="num">{windText(division.windPressure)}</dd>
+        </dl>
+        <div className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-0.5 text-xs">
+          {division.enclosed && (
+            <span className="inline-flex items-center gap-1 text-ink" data-testid={`enclosed-${division.name}`}><EnclosedMark />Enclosed</span>
+          )}
+          {figures && (
+            <span className="num text-tin">
+              {division.stops.length} stops · {formatNumber(figures.pipes.total)} pipes
+            </span>
+          )}
+        </div>
+        {figures && hasChest && (
+          <p
+            className={`mt-1.5 flex items-start gap-1 text-xs ${state === "clash" ? "font-semibold text-clash" : state === "fit" ? "text-fit" : "text-tin"}`}
+            data-testid={`fit-${division.name}`}
+            data-fits={state}
+            title={words}
+          >
+            <StateMark kind={state} className="mt-px h-3.5 w-3.5" />
+            {state === "clash" ? "Chest does not fit" : state === "fit" ? "Chest fits" : "Chest space not given"}
+          </p>
+        )}
+      </header>
+      <SortableContext items={division.stops.map((s) => `stop:${s.id}`)} strategy={verticalListSortingStrategy}>
+        <ol className="flex min-h-16 flex-1 flex-col gap-1.5 p-2" aria-label={`Stops of the ${division.name}`}>
+          {division.stops.map((s) => (
+            <StopCard
+              key={s.id}
+              stop={s}
+              pipes={pipesById.get(s.id)}
+              divisionName={division.name}
+              editable={editable}
+              disabledDrop={activeType === "division"}
+              onEdit={() => onEditStop(s.id)}
+            />
+          ))}
+          {division.stops.length === 0 && <li className="rounded border border-dashed border-tin-rule px-2 py-3 text-center text-xs text-tin">No stops yet{editable ? " — add one or drag one here" : ""}.</li>}
+        </ol>
+      </SortableContext>
+      {editable && (
+        <div className="border-t border-tin-rule p-2">
+          <button type="button" className="btn w-full justify-center py-1 text-xs" onClick={onAddStop} aria-label={`Add a stop to the ${division.name}`}>
+            + Add stop
+          </button>
+        </div>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,124 @@
+"use client";
+import { Caution } from "@/components/ui/caution";
+import { StateMark } from "@/components/ui/state-mark";
+import { departmentLabels, departments } from "@/lib/estimate";
+import { materialLabels } from "./format";
+import { chestWords, fitState } from "./chest-words";
+import { formatNumber } from "./format";
+import type { Figures } from "./use-figures";
+
+function money(amount: string, currency: string): string {
+  const n = Number(amount);
+  try {
+    return n.toLocaleString("en-GB", { style: "currency", currency, maximumFractionDigits: 0 }).replace(/,/g, "\u202f");
+  } catch {
+    return `${currency} ${formatNumber(n)}`;
+  }
+}
+
+function Row({ label, value, strong = false, testId }: { label: string; value: string; strong?: boolean; testId?: string }) {
+  return (
+    <div className={`flex justify-between gap-3 py-0.5 ${strong ? "font-semibold" : ""}`}>
+      <dt className="text-ink-soft">{label}</dt>
+      <dd className="num text-right" data-testid={testId}>{value}</dd>
+    </div>
+  );
+}
+
+/** The estimator's figures for the document as it stands, recomputed on every change. */
+export function FiguresPanel({ figures, showMoney }: { figures: Figures; showMoney: boolean }) {
+  if (!figures.ok) {
+    return (
+      <section className="panel p-3 text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="incomplete">
+        <h2 id="figures-heading" className="mb-1 text-lg font-semibold">Figures</h2>
+        <p className="flex items-start gap-1.5 text-caution"><StateMark kind="caution" className="mt-0.5" />The figures wait for the scheme to be complete:</p>
+        <ul className="mt-1 list-disc space-y-0.5 pl-5 text-xs text-ink-soft" data-testid="figures-messages">
+          {figures.messages.slice(0, 12).map((m, i) => <li key={i}>{m}</li>)}
+        </ul>
+      </section>
+    );
+  }
+  const e = figures.estimate;
+  const t = e.totals;
+  const clashes = e.divisions.filter((d) => d.chest.fit && !d.chest.fit.fits);
+  const metals = (Object.entries(t.metalKg) as [keyof typeof materialLabels, number][]).filter(([, kg]) => kg > 0);
+  const woods = (Object.entries(t.woodM3) as [keyof typeof materialLabels, number][]).filter(([, m3]) => m3 > 0);
+  return (
+    <section className="panel text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="ok">
+      <div className="flex items-baseline border-b border-tin-rule px-3 py-2">
+        <h2 id="figures-heading" className="flex-1 text-lg font-semibold">Figures</h2>
+        <span className="text-xs text-tin" title="Computed in the browser on every change">live</span>
+      </div>
+      {clashes.length > 0 && (
+        <p role="alert" className="flex items-start gap-1.5 border-b border-clash/40 bg-clash-light px-3 py-2 font-semibold text-clash" data-testid="fit-warning">
+          <StateMark kind="clash" className="mt-0.5 h-4 w-4" />
+          <span>Does not fit: {clashes.map((d) => `the ${d.name} chest`).join(", ")}.</span>
+        </p>
+      )}
+      <div className="space-y-3 px-3 py-2">
+        <dl>
+          <Row label="Stops" value={formatNumber(t.stops)} testId="fig-stops" />
+          <Row label="Ranks" value={formatNumber(t.ranks)} />
+          <Row label="Pipes in the organ" value={formatNumber(t.pipes.total)} strong testId="fig-pipes" />
+          <Row label="new" value={formatNumber(t.pipes.new)} testId="fig-pipes-new" />
+          <Row label="reused" value={formatNumber(t.pipes.reused)} testId="fig-pipes-reused" />
+          <Row label="restored" value={formatNumber(t.pipes.restored)} />
+          {t.pipes.prepared > 0 && <Row label="prepared for (later)" value={formatNumber(t.pipes.prepared)} />}
+          {t.pipes.removed > 0 && <Row label="removed" value={formatNumber(t.pipes.removed)} />}
+        </dl>
+
+        <div>
+          <h3 className="label">Chest space by division</h3>
+          <ul className="space-y-1">
+            {e.divisions.map((d) => {
+              const state = fitState(d.chest.fit, d.chest.main.rows > 0);
+              return (
+                <li key={d.id} className={`flex items-start gap-1.5 text-xs ${state === "clash" ? "text-clash" : "text-ink-soft"}`} data-testid={`figures-chest-${d.name}`} data-fits={state}>
+                  <StateMark kind={state} className={`mt-px ${state === "fit" ? "text-fit" : state === "unknown" ? "text-tin" : ""}`} />
+                  <span>
+                    <strong className="font-semibold text-ink">{d.name}</strong>{" "}
+                    {d.chest.main.rows > 0 ? chestWords(d.chest.main, d.chest.space, d.chest.fit) : "no pipes on a chest."}
+                    {d.chest.offset && <> Offset chest {formatNumber(Math.round(d.chest.offset.lengthMm))} × {formatNumber(Math.round(d.chest.offset.depthMm))} mm.</>}
+                  </span>
+                </li>
+              );
+            })}
+          </ul>
+        </div>
+
+        <div>
+          <h3 className="label">Materials</h3>
+          <dl>
+          <Row label="Pipe metal" value={`${formatNumber(t.metalTotalKg, 1)} kg`} strong testId="fig-metal" />
+          {metals.map(([m, kg]) => <Row key={m} label={materialLabels[m]} value={`${formatNumber(kg, 1)} kg`} />)}
+          {woods.map(([m, m3]) => <Row key={m} label={`${materialLabels[m]} board`} value={`${formatNumber(m3, 3)} m³`} />)}
+          {t.wiring.conductorLengthKm > 0 && <Row label="Cable" value={`${formatNumber(t.wiring.conductorLengthKm, 2)} km`} />}
+        </dl>
+        </div>
+
+        <div data-testid="fig-hours">
+          <h3 className="label">Hours by department</h3>
+          <dl>
+          {departments.filter((d) => t.hours[d] > 0).map((d) => <Row key={d} label={departmentLabels[d]} value={formatNumber(t.hours[d], 0)} />)}
+          <Row label="Total hours" value={formatNumber(t.hoursTotal, 0)} strong testId="fig-hours-total" />
+          {e.programme.totalWeeks > 0 && <Row label="Programme" value={`${formatNumber(e.programme.totalWeeks)} weeks`} />}
+        </dl>
+        </div>
+
+        {showMoney && (
+          <div>
+            <h3 className="label">Money</h3>
+          <dl>
+            <Row label="Labour" value={money(e.money.labourAmount, e.money.currency)} />
+            <Row label="Materials" value={money(e.money.materialsAmount, e.money.currency)} />
+            <Row label="Total with tax" value={money(e.money.totalAmount, e.money.currency)} strong testId="fig-money" />
+          </dl>
+            <p className="mt-1 text-[11px] text-tin">From the firm&apos;s rates ({e.ratesProvenance}).</p>
+          </div>
+        )}
+        {e.cautions.map((c) => <Caution key={c.code}>{c.text}</Caution>)}
+        <p className="text-[11px] text-tin num" suppressHydrationWarning>Computed in {formatNumber(figures.ms, 1)} ms.</p>
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,152 @@
+/** How the trade writes pitches, compasses and treatments: shared by the editor, the stop list and the drawings. */
+import { actions, chestTypes, families, constructions, materials, treatments, type Treatment } from "@/lib/estimate/scheme";
+import { formatFootage, parseFootage } from "@/lib/estimate";
+
+type StopLike = { footage: string | number; ranks?: number; family: string };
+
+const ROMAN: ReadonlyArray<[number, string]> = [
+  [10, "X"], [9, "IX"], [5, "V"], [4, "IV"], [1, "I"],
+];
+
+/** Ranks of a mixture in Roman numerals, as stop lists write them: 4 → "IV". Stops have at most 12 ranks. */
+export function romanNumeral(n: number): string {
+  let rest = Math.max(0, Math.floor(n));
+  let out = "";
+  for (const [value, letters] of ROMAN) {
+    while (rest >= value) {
+      out += letters;
+      rest -= value;
+    }
+  }
+  return out;
+}
+
+/** "2 2/3" → "2⅔′"; text that is not a footage is shown as typed, so a mistake stays visible. */
+export function footageText(footage: string | number): string {
+  const f = parseFootage(footage);
+  return f ? `${formatFootage(f)}′` : `${String(footage).trim()}?`;
+}
+
+export function isValidFootage(footage: string | number): boolean {
+  return parseFootage(footage) !== null;
+}
+
+/** A stop's pitch as a stop list gives it: "8′", "2⅔′", a mixture's ranks "IV", a compound stop "2⅔′ II". */
+export function pitchText(stop: StopLike): string {
+  const ranks = stop.ranks ?? 1;
+  if (stop.family === "mixture") return romanNumeral(Math.max(ranks, 1));
+  if (ranks > 1) return `${footageText(stop.footage)} ${romanNumeral(ranks)}`;
+  return footageText(stop.footage);
+}
+
+/** Helmholtz names with typographic primes: c'''' → c⁗ is not used by the trade; primes stay separate. */
+export function noteText(note: string): string {
+  return note.replace(/'/g, "′").replace(/#/g, "♯").replace(/(?<=[a-gA-G])b(?=′|$)/, "♭");
+}
+
+export function compassText(c: { low: string; high: string }): string {
+  return `${noteText(c.low)}–${noteText(c.high)}`;
+}
+
+export const treatmentLabels: Record<Treatment, string> = {
+  new: "New",
+  retained: "Retained",
+  restored: "Restored",
+  revoiced: "Revoiced",
+  relocated: "Relocated",
+  extension: "Extension",
+  borrowed: "Borrowed",
+  prepared: "Prepared for",
+  removed: "Removed",
+};
+
+export const familyLabels: Record<(typeof families)[number], string> = {
+  principal: "Principal",
+  flute: "Flute",
+  string: "String",
+  reed: "Reed",
+  hybrid: "Hybrid",
+  mutation: "Mutation",
+  mixture: "Mixture",
+};
+
+export const constructionLabels: Record<(typeof constructions)[number], string> = {
+  open: "Open",
+  stopped: "Stopped",
+  "half-stopped": "Half-stopped (chimney)",
+  conical: "Conical",
+  capped: "Capped",
+  "reed-full": "Reed, full-length resonator",
+  "reed-half": "Reed, half-length resonator",
+};
+
+export const materialLabels: Record<(typeof materials)[number], string> = {
+  "high-tin": "High tin",
+  spotted: "Spotted metal",
+  common: "Common metal",
+  zinc: "Zinc",
+  copper: "Copper",
+  pine: "Pine",
+  oak: "Oak",
+  mahogany: "Mahogany",
+};
+
+export const actionLabels: Record<(typeof actions)[number], string> = {
+  mechanical: "Mechanical",
+  "electro-pneumatic": "Electro-pneumatic",
+  electric: "Electric",
+  pneumatic: "Pneumatic",
+};
+
+export const chestTypeLabels: Record<(typeof chestTypes)[number], string> = {
+  slider: "Slider chest",
+  pitman: "Pitman chest",
+  "direct-electric": "Direct electric",
+  ventil: "Ventil chest",
+};
+
+export const workLabels: Record<"new" | "restored" | "retained", string> = {
+  new: "New",
+  restored: "Restored",
+  retained: "Retained as is",
+};
+
+export function windText(w: { value: number; unit: "mm" | "in" }): string {
+  return w.unit === "in" ? `${formatNumber(w.value, 2)} in w.g.` : `${formatNumber(w.value, 0)} mm w.g.`;
+}
+
+/** Numbers with a thin space between thousands, as drawings give them: 3 420. */
+export function formatNumber(n: number, digits = 0): string {
+  if (!Number.isFinite(n)) return "–";
+  return n
+    .toLocaleString("en-GB", { minimumFractionDigits: 0, maximumFractionDigits: digits })
+    .replace(/,/g, "\u202f");
+}
+
+export function formatMm(n: number): string {
+  return `${formatNumber(Math.round(n))} mm`;
+}
+
+export function formatDate(iso: string | null | undefined): string {
+  if (!iso) return "–";
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  return d.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
+}
+
+export function formatDateTime(iso: string | null | undefined): string {
+  if (!iso) return "–";
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  return d.toLocaleString("en-GB", { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" });
+}
+
+export const treatmentOrder = treatments;
+
+/** "Swell to Great", "Swell Octave", "Swell to Pedal Sub Octave": the trade's names for couplers. */
+export function couplerName(c: { from: string; to: string; octave: -1 | 0 | 1 }, divisions: readonly { id: string; name: string }[]): string {
+  const name = (id: string) => divisions.find((d) => d.id === id)?.name ?? "?";
+  const octave = c.octave === 1 ? " Octave" : c.octave === -1 ? " Sub Octave" : "";
+  return c.from === c.to ? `${name(c.from)}${octave || " Unison"}` : `${name(c.from)} to ${name(c.to)}${octave}`;
+}
+

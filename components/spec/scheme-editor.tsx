@@ -1,0 +1,367 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import Link from "next/link";
+import { useCallback, useEffect, useMemo, useReducer, useState } from "react";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
+import { Dialog } from "@/components/ui/dialog";
+import { StateMark } from "@/components/ui/state-mark";
+import { schemeDocumentSchema, type SchemeDocument, type SchemeRead } from "@/lib/spec/document";
+import { AccessoriesEditor } from "./accessories-editor";
+import { ChestsView } from "./chests-view";
+import { DivisionBoard } from "./division-board";
+import { DivisionForm } from "./division-form";
+import { addDivision, addStop, findStop, newId, removeDivision, removeStop, setAccessories, updateDivision, updateStop } from "./doc-ops";
+import { FiguresPanel } from "./figures-panel";
+import { formatDateTime, pitchText } from "./format";
+import { historyReducer, initHistory } from "./history";
+import { RevisionsPanel } from "./revisions-panel";
+import { SaveStateBadge } from "./save-state";
+import { StopForm } from "./stop-form";
+import type { StopPipes } from "./stop-card";
+import { stopPipesById, useFigures } from "./use-figures";
+import { useSchemeSave } from "./use-scheme-save";
+
+type Editing =
+  | { kind: "stop"; divisionId: string; stopId?: string; newId: string }
+  | { kind: "division"; divisionId?: string; newId: string }
+  | { kind: "details" }
+  | null;
+
+type Tab = "stops" | "chests" | "accessories";
+
+const detailsSchema = schemeDocumentSchema.pick({ name: true, description: true });
+
+function DetailsForm({ doc, onSubmit, onCancel }: { doc: SchemeDocument; onSubmit: (v: z.output<typeof detailsSchema>) => void; onCancel: () => void }) {
+  const form = useForm<z.input<typeof detailsSchema>, unknown, z.output<typeof detailsSchema>>({
+    resolver: zodResolver(detailsSchema),
+    defaultValues: { name: doc.name, description: doc.description },
+  });
+  const err = form.formState.errors;
+  return (
+    <form onSubmit={form.handleSubmit(onSubmit)} noValidate className="space-y-3" aria-label="Scheme details">
+      <div>
+        <label className="label" htmlFor="scheme-doc-name">Name of the scheme</label>
+        <input id="scheme-doc-name" className="field" aria-invalid={!!err.name} {...form.register("name")} />
+        {err.name && <p className="field-error">✕ {err.name.message}</p>}
+      </div>
+      <div>
+        <label className="label" htmlFor="scheme-doc-description">Description</label>
+        <textarea id="scheme-doc-description" rows={4} className="field" {...form.register("description")} />
+        {err.description && <p className="field-error">✕ {err.description.message}</p>}
+      </div>
+      <div className="flex gap-2">
+        <button type="submit" className="btn-primary">Apply</button>
+        <button type="button" className="btn" onClick={onCancel}>Cancel</button>
+      </div>
+    </form>
+  );
+}
+
+export function SchemeEditor({
+  initialScheme,
+  projectId,
+  projectName,
+  editable,
+  showMoney,
+}: {
+  initialScheme: SchemeRead;
+  projectId: string;
+  projectName: string;
+  editable: boolean;
+  showMoney: boolean;
+}) {
+  const [history, dispatch] = useReducer(historyReducer, initialScheme.document, initHistory);
+  const doc = history.present;
+  const save = useSchemeSave({ scheme: initialScheme, present: doc, label: history.label, enabled: editable });
+  const { saveNow } = save;
+  const figures = useFigures(doc, initialScheme.tuning);
+  const [tab, setTab] = useState<Tab>("stops");
+  const [editing, setEditing] = useState<Editing>(null);
+  const [showRevisions, setShowRevisions] = useState(false);
+  const [notice, setNotice] = useState<string | null>(null);
+
+  const edit = useCallback((next: SchemeDocument, label: string) => {
+    dispatch({ type: "edit", doc: next, label });
+    setNotice(label);
+  }, []);
+  const undo = useCallback(() => dispatch({ type: "undo" }), []);
+  const redo = useCallback(() => dispatch({ type: "redo" }), []);
+
+  const pipesById = useMemo(() => stopPipesById(figures) as Map<string, StopPipes>, [figures]);
+  const divisionFigures = useMemo(() => new Map(figures.ok ? figures.estimate.divisions.map((d) => [d.id, d]) : []), [figures]);
+
+  // Ctrl+Z / Ctrl+Shift+Z (and Ctrl+Y) undo and redo; inside a text field the field's own undo wins.
+  useEffect(() => {
+    if (!editable) return;
+    const onKey = (e: KeyboardEvent) => {
+      if (!(e.ctrlKey || e.metaKey)) return;
+      const t = e.target as HTMLElement | null;
+      const inField = !!t && (t.isContentEditable || ["INPUT", "TEXTAREA", "SELECT"].includes(t.tagName));
+      const k = e.key.toLowerCase();
+      if (k === "s") {
+        e.preventDefault();
+        void saveNow();
+        return;
+      }
+      if (inField || document.querySelector("dialog[open]")) return;
+      if (k === "z" && !e.shiftKey) {
+        e.preventDefault();
+        undo();
+      } else if ((k === "z" && e.shiftKey) || k === "y") {
+        e.preventDefault();
+        redo();
+      }
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [editable, undo, redo, saveNow]);
+
+  const state = save.state;
+
+  function loadTheirs(current: SchemeRead) {
+    dispatch({ type: "replace", doc: current.document, label: `Loaded version ${current.version}` });
+    save.acceptServer(current, current.document);
+    setNotice(`Loaded version ${current.version}. Undo brings your version back.`);
+  }
+
+  const sources = useMemo(() => {
+    const out: { id: string; label: string }[] = [];
+    for (const d of doc.divisions) for (const s of d.stops) out.push({ id: s.id, label: `${d.name}: ${s.name} ${pitchText(s)}` });
+    return out;
+  }, [doc]);
+
+  const editingStop = editing?.kind === "stop" && editing.stopId ? findStop(doc, editing.stopId) : null;
+  const editingDivision = editing?.kind === "division" && editing.divisionId ? doc.divisions.find((d) => d.id === editing.divisionId) : undefined;
+  const targetDivision = editing?.kind === "stop" ? doc.divisions.find((d) => d.id === editing.divisionId) : undefined;
+
+  return (
+    <div className="space-y-3">
+      {/* Title and toolbar */}
+      <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
+        <div className="min-w-0 flex-1">
+          <nav aria-label="Breadcrumb" className="text-xs text-tin">
+            <Link href="/projects" className="hover:text-ink">Projects</Link> <span aria-hidden="true">/</span>{" "}
+            <Link href={`/projects/${projectId}`} className="hover:text-ink">{projectName}</Link> <span aria-hidden="true">/</span>
+          </nav>
+          <div className="flex items-baseline gap-3">
+            <h1 className="truncate text-2xl font-semibold" data-testid="scheme-name">{doc.name}</h1>
+            {editable && (
+              <button type="button" className="text-xs text-tin underline hover:text-ink" onClick={() => setEditing({ kind: "details" })}>
+                Rename / describe
+              </button>
+            )}
+          </div>
+          {doc.description && <p className="max-w-3xl text-sm text-ink-soft">{doc.description}</p>}
+        </div>
+        <div className="flex flex-wrap items-center gap-2">
+          {editable ? <SaveStateBadge state={state} version={save.version} /> : <span className="text-sm text-tin" data-testid="save-state" data-state="read-only">Read only · v{save.version}</span>}
+          {editable && (
+            <>
+              <button type="button" className="btn" onClick={undo} disabled={history.past.length === 0} aria-keyshortcuts="Control+Z" title="Undo (Ctrl+Z)">
+                ↶ Undo
+              </button>
+              <button type="button" className="btn" onClick={redo} disabled={history.future.length === 0} aria-keyshortcuts="Control+Shift+Z" title="Redo (Ctrl+Shift+Z)">
+                ↷ Redo
+              </button>
+              <button type="button" className="btn" onClick={() => void save.saveNow()} disabled={state.kind === "saved" || state.kind === "saving" || state.kind === "conflict"} title="Save now (Ctrl+S)">
+                Save now
+              </button>
+            </>
+          )}
+          <button type="button" className="btn" aria-pressed={showRevisions} onClick={() => setShowRevisions((v) => !v)}>
+            Revisions
+          </button>
+          <Link className="btn" href={`/projects/${projectId}/schemes/${initialScheme.id}/stop-list`}>Stop list</Link>
+        </div>
+      </div>
+
+      {notice && editable && state.kind !== "conflict" && (
+        <p className="text-xs text-tin" aria-live="polite" data-testid="last-edit">{notice}</p>
+      )}
+
+      {state.kind === "conflict" && (
+        <div role="alert" className="flex flex-wrap items-center gap-3 rounded-md border border-caution bg-caution-light px-3 py-2 text-sm" data-testid="conflict-banner">
+          <StateMark kind="caution" className="h-4 w-4 text-caution" />
+          <span className="flex-1">
+            <strong>Someone else saved version {state.current.version}</strong>
+            {state.current.updatedByName && <> ({state.current.updatedByName}, {formatDateTime(state.current.updatedAt)})</>} while you were editing. Nothing of yours is lost yet: choose which to keep.
+          </span>
+          <button type="button" className="btn" onClick={() => loadTheirs(state.current)}>
+            Load their version
+          </button>
+          <button type="button" className="btn-primary" onClick={() => save.saveOver(state.current)}>
+            Keep mine and save over
+          </button>
+          <span className="basis-full text-xs text-ink-soft">Loading theirs keeps yours one Undo away; saving over keeps theirs in the revisions.</span>
+        </div>
+      )}
+      {state.kind === "invalid" && (
+        <div role="alert" className="rounded-md border border-clash bg-clash-light px-3 py-2 text-sm text-clash" data-testid="invalid-banner">
+          <p className="flex items-center gap-1.5 font-semibold"><StateMark kind="clash" />The server did not save this version:</p>
+          <ul className="mt-1 list-disc pl-6 text-ink">
+            {state.messages.map((m, i) => <li key={i}>{m}</li>)}
+          </ul>
+          <p className="mt-1 text-xs text-ink-soft">Your edits are kept here; correct them and the scheme saves again.</p>
+        </div>
+      )}
+      {state.kind === "error" && (
+        <div role="alert" className="flex items-center gap-3 rounded-md border border-clash bg-clash-light px-3 py-2 text-sm" data-testid="error-banner">
+          <StateMark kind="clash" className="text-clash" />
+          <span className="flex-1">{state.message}</span>
+          <button type="button" className="btn" onClick={() => void save.saveNow()}>Try again</button>
+        </div>
+      )}
+
+      <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,1fr)_21rem]">
+        <div className="min-w-0 space-y-3">
+          <div role="tablist" aria-label="Views of the scheme" className="flex items-center gap-1 border-b border-tin-rule">
+            {(
+              [
+                ["stops", "Divisions and stops"],
+                ["chests", "Chests"],
+                ["accessories", "Couplers and accessories"],
+              ] as const
+            ).map(([key, label]) => (
+              <button
+                key={key}
+                type="button"
+                role="tab"
+                id={`tab-${key}`}
+                aria-selected={tab === key}
+                aria-controls={`panel-${key}`}
+                className={`-mb-px rounded-t border px-3 py-1.5 text-sm ${tab === key ? "border-tin-rule border-b-paper bg-paper font-semibold text-ink" : "border-transparent text-ink-soft hover:text-ink"}`}
+                onClick={() => setTab(key)}
+              >
+                {label}
+              </button>
+            ))}
+            {editable && tab === "stops" && (
+              <button type="button" className="btn ml-auto mb-1" onClick={() => setEditing({ kind: "division", newId: newId("div") })}>
+                + Add division
+              </button>
+            )}
+          </div>
+
+          <div role="tabpanel" id={`panel-${tab}`} aria-labelledby={`tab-${tab}`}>
+            {tab === "stops" &&
+              (doc.divisions.length === 0 ? (
+                <div className="panel p-6 text-center text-sm text-ink-soft">
+                  No divisions yet.{" "}
+                  {editable && (
+                    <button type="button" className="btn-primary ml-2" onClick={() => setEditing({ kind: "division", newId: newId("div") })}>
+                      Add the first division
+                    </button>
+                  )}
+                </div>
+              ) : (
+                <DivisionBoard
+                  doc={doc}
+                  divisionFigures={divisionFigures}
+                  pipesById={pipesById}
+                  editable={editable}
+                  onChange={edit}
+                  onEditDivision={(divisionId) => setEditing({ kind: "division", divisionId, newId: "" })}
+                  onAddStop={(divisionId) => setEditing({ kind: "stop", divisionId, newId: newId("stop") })}
+                  onEditStop={(stopId) => {
+                    const f = findStop(doc, stopId);
+                    if (f) setEditing({ kind: "stop", divisionId: f.division.id, stopId, newId: "" });
+                  }}
+                />
+              ))}
+            {tab === "chests" && <ChestsView figures={figures} />}
+            {tab === "accessories" && (
+              <AccessoriesEditor key={save.version + ":" + history.past.length} doc={doc} editable={editable} onApply={(acc) => edit(setAccessories(doc, acc), "Changed couplers and accessories")} />
+            )}
+          </div>
+        </div>
+
+        <div className="space-y-3 lg:sticky lg:top-3">
+          {showRevisions && (
+            <RevisionsPanel
+              schemeId={initialScheme.id}
+              currentVersion={save.version}
+              editable={editable}
+              hasUnsaved={state.kind !== "saved"}
+              onClose={() => setShowRevisions(false)}
+              onRestored={(scheme, from) => {
+                dispatch({ type: "replace", doc: scheme.document, label: `Restored version ${from}` });
+                save.acceptServer(scheme, scheme.document);
+                setNotice(`Restored version ${from} as version ${scheme.version}. Undo brings back what you had.`);
+              }}
+              onConflict={(current) => {
+                if (current) setNotice(`Someone else saved version ${current.version}; reload the page to see it.`);
+              }}
+            />
+          )}
+          <FiguresPanel figures={figures} showMoney={showMoney} />
+        </div>
+      </div>
+
+      <Dialog
+        open={editing?.kind === "stop"}
+        onClose={() => setEditing(null)}
+        title={editingStop ? `${editingStop.stop.name} ${pitchText(editingStop.stop)} — ${editingStop.division.name}` : `New stop — ${targetDivision?.name ?? ""}`}
+        wide
+      >
+        {editing?.kind === "stop" && (
+          <StopForm
+            initial={editingStop?.stop}
+            newId={editing.newId}
+            sources={sources.filter((s) => s.id !== editing.stopId)}
+            onCancel={() => setEditing(null)}
+            onSubmit={(stop) => {
+              if (editingStop) edit(updateStop(doc, stop), `Changed ${stop.name} ${pitchText(stop)}`);
+              else edit(addStop(doc, editing.divisionId, stop), `Added ${stop.name} ${pitchText(stop)} to the ${targetDivision?.name}`);
+              setEditing(null);
+            }}
+            onDelete={
+              editingStop
+                ? () => {
+                    edit(removeStop(doc, editingStop.stop.id), `Deleted ${editingStop.stop.name} ${pitchText(editingStop.stop)} from the ${editingStop.division.name}`);
+                    setEditing(null);
+                  }
+                : undefined
+            }
+          />
+        )}
+      </Dialog>
+
+      <Dialog open={editing?.kind === "division"} onClose={() => setEditing(null)} title={editingDivision ? `Division: ${editingDivision.name}` : "New division"} wide>
+        {editing?.kind === "division" && (
+          <DivisionForm
+            initial={editingDivision}
+            newId={editing.newId}
+            onCancel={() => setEditing(null)}
+            onSubmit={(division) => {
+              if (editingDivision) edit(updateDivision(doc, division), `Changed the ${division.name}`);
+              else edit(addDivision(doc, division), `Added the ${division.name}`);
+              setEditing(null);
+            }}
+            onDelete={
+              editingDivision
+                ? () => {
+                    edit(removeDivision(doc, editingDivision.id), `Deleted the ${editingDivision.name} and its ${editingDivision.stops.length} stops`);
+                    setEditing(null);
+                  }
+                : undefined
+            }
+          />
+        )}
+      </Dialog>
+
+      <Dialog open={editing?.kind === "details"} onClose={() => setEditing(null)} title="Scheme details">
+        {editing?.kind === "details" && (
+          <DetailsForm
+            doc={doc}
+            onCancel={() => setEditing(null)}
+            onSubmit={(v) => {
+              edit({ ...doc, name: v.name, description: v.description }, "Changed the scheme's name or description");
+              setEditing(null);
+            }}
+          />
+        )}
+      </Dialog>
+    </div>
+  );
+}
