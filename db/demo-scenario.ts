@@ -1,5 +1,7 @@
 // The invented demo scenario: an invented parish, its invented organ and two alternative schemes.
 // Every name, place and figure here is made up for the demo.
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
 import type { SchemeDocumentInput } from "../lib/spec/document";
 
 type StopIn = SchemeDocumentInput["divisions"] extends (infer D)[] | undefined ? (D extends { stops?: (infer S)[] } ? S : never) : never;
@@ -18,9 +20,9 @@ export const restoreScheme: SchemeDocumentInput = {
   divisions: [
     {
       id: "gt", name: "Great", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 89, unit: "mm" },
-      consoleDistanceM: 6, space: { lengthMm: 3400, depthMm: 1500 }, chestWork: "restored",
+      consoleDistanceM: 6, space: { lengthMm: 6200, depthMm: 1450 }, chestWork: "restored",
       stops: [
-        stop("gt-od", "Open Diapason", "8", "principal", { treatment: "restored", scale: { offsetHt: 2 } }),
+        stop("gt-od", "Open Diapason", "8", "principal", { treatment: "restored", scale: { offsetHt: 2 }, offsetBassPipes: 12 }),
         stop("gt-cl", "Clarabella", "8", "flute", { treatment: "restored", construction: "open", material: "pine" }),
         stop("gt-du", "Dulciana", "8", "string", { treatment: "restored", scale: { offsetHt: -4 } }),
         stop("gt-pr", "Principal", "4", "principal", { treatment: "restored" }),
@@ -31,9 +33,9 @@ export const restoreScheme: SchemeDocumentInput = {
     },
     {
       id: "sw", name: "Swell", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 95, unit: "mm" },
-      enclosed: true, consoleDistanceM: 9, space: { lengthMm: 3000, depthMm: 1400 }, chestWork: "restored",
+      enclosed: true, consoleDistanceM: 9, space: { lengthMm: 5800, depthMm: 1650 }, chestWork: "restored",
       stops: [
-        stop("sw-ob", "Open Diapason", "8", "principal", { treatment: "restored" }),
+        stop("sw-ob", "Open Diapason", "8", "principal", { treatment: "restored", offsetBassPipes: 12 }),
         stop("sw-lg", "Lieblich Gedackt", "8", "flute", { treatment: "restored", construction: "stopped", material: "pine" }),
         stop("sw-sa", "Salicional", "8", "string", { treatment: "restored", scale: { offsetHt: -6 } }),
         stop("sw-vc", "Voix Céleste", "8", "string", { treatment: "restored", scale: { offsetHt: -6 }, compass: { low: "c", high: "c''''" } }),
@@ -48,7 +50,7 @@ export const restoreScheme: SchemeDocumentInput = {
     },
     {
       id: "ped", name: "Pedal", ...pedal, action: "electro-pneumatic", chest: "pitman", chestLayout: "chromatic",
-      windPressure: { value: 100, unit: "mm" }, consoleDistanceM: 12, space: { lengthMm: 4200, depthMm: 1000 }, chestWork: "restored", passageBoard: false,
+      windPressure: { value: 100, unit: "mm" }, consoleDistanceM: 12, space: { lengthMm: 7400, depthMm: 1000 }, chestWork: "restored", passageBoard: false,
       stops: [
         stop("ped-bd", "Bourdon", "16", "flute", { treatment: "restored", construction: "stopped", material: "pine" }),
         stop("ped-bf", "Bass Flute", "8", "flute", { treatment: "extension", source: "ped-bd", construction: "stopped", material: "pine" }),
@@ -91,7 +93,7 @@ export const enlargeScheme: SchemeDocumentInput = {
     restoreScheme.divisions![1]!,
     {
       id: "ch", name: "Choir", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 75, unit: "mm" },
-      enclosed: true, consoleDistanceM: 8, space: { lengthMm: 2600, depthMm: 1100 },
+      enclosed: true, consoleDistanceM: 8, space: { lengthMm: 5800, depthMm: 1350 },
       stops: [
         stop("ch-sd", "Stopped Diapason", "8", "flute", { construction: "stopped", material: "oak" }),
         stop("ch-dl", "Dulciana", "8", "string", { treatment: "relocated", scale: { offsetHt: -4 } }),
@@ -103,8 +105,8 @@ export const enlargeScheme: SchemeDocumentInput = {
       ],
     },
     {
+      // The same Pedal space as scheme A: the new basses and the Trombone do not fit its depth.
       ...restoreScheme.divisions![2]!,
-      space: { lengthMm: 4200, depthMm: 1000 },
       stops: [
         stop("ped-ow", "Open Wood", "16", "flute", { material: "pine", scale: { offsetHt: 4 }, offsetBassPipes: 0 }),
         ...restoreScheme.divisions![2]!.stops!,
@@ -127,6 +129,9 @@ export const enlargeScheme: SchemeDocumentInput = {
     combination: { memoryLevels: 256, generalPistons: 8, divisionalPistons: 6 },
   },
 };
+
+/** The large invented example (five manuals and pedal, about 150 stops) from examples/. */
+const largeExample = JSON.parse(readFileSync(join(__dirname, "../examples/large-five-manual.json"), "utf8")) as SchemeDocumentInput;
 
 export const demoProjects = [
   {
@@ -160,5 +165,21 @@ export const demoProjects = [
     },
     schemes: [] as SchemeDocumentInput[],
     shared: [] as boolean[],
+  },
+  {
+    project: {
+      name: "Vellmar Conservatory — Great Hall organ",
+      clientName: "Vellmar Conservatory of Music (invented)",
+      venue: "Great Hall (invented)",
+      location: "Vellmar (invented city)",
+      instrument: "Five-manual concert organ, electric action, partly reusing an earlier instrument (invented)",
+      status: "tender" as const,
+      targetDate: "2031-09-01",
+      pitchHz: 440,
+      temperatureC: 18,
+      notes: "Large example scheme for trying the editor at full size. (Invented.)",
+    },
+    schemes: [{ ...largeExample, name: "Concert scheme", description: "Five manuals and pedal, about 150 stops. (Invented demo scheme.)" }],
+    shared: [false],
   },
 ];

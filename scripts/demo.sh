@@ -23,7 +23,7 @@ cat <<TXT
 
 Stopwright is running on http://127.0.0.1:3000  (Ctrl-C stops it; the data stays)
 Demo accounts (invented people of an invented firm):
-$(node_modules/.bin/tsx -e 'import("./db/demo-accounts").then(m => m.demoAccounts.forEach(a => console.log("  " + a.role.padEnd(10) + a.email.padEnd(32) + a.password)))')
+$(node_modules/.bin/tsx scripts/print-demo-accounts.ts)
 
 TXT
 exec node_modules/.bin/next start -H 127.0.0.1 -p 3000

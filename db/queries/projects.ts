@@ -1,5 +1,5 @@
 import "server-only";
-import { and, asc, count, desc, eq, inArray, isNull, sql } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { projectMembers, projects, schemes, stops, divisions, users, type Project } from "@/db/schema";
 import { AppError } from "@/lib/server/errors";
@@ -34,16 +34,21 @@ export async function listProjectsForUser({ user, includeArchived = false }: { u
   if (user.role === "client") {
     conditions.push(inArray(projects.id, db.select({ id: projectMembers.projectId }).from(projectMembers).where(eq(projectMembers.userId, user.id))));
   }
-  // Clients count only the schemes shared with them.
-  const schemeCount = user.role === "client"
-    ? sql<number>`(select count(*)::int from ${schemes} where ${schemes.projectId} = ${projects.id} and ${schemes.sharedWithClient})`
-    : sql<number>`(select count(*)::int from ${schemes} where ${schemes.projectId} = ${projects.id})`;
   const rows = await db
-    .select({ project: projects, schemeCount })
+    .select()
     .from(projects)
     .where(conditions.length ? and(...conditions) : undefined)
     .orderBy(desc(projects.updatedAt));
-  return rows.map((r) => summary(r.project, r.schemeCount));
+  const counts = rows.length
+    ? await db
+        .select({ projectId: schemes.projectId, n: count() })
+        .from(schemes)
+        // Clients count only the schemes shared with them.
+        .where(and(inArray(schemes.projectId, rows.map((p) => p.id)), user.role === "client" ? eq(schemes.sharedWithClient, true) : undefined))
+        .groupBy(schemes.projectId)
+    : [];
+  const countBy = new Map(counts.map((c) => [c.projectId, c.n]));
+  return rows.map((p) => summary(p, countBy.get(p.id) ?? 0));
 }
 
 async function membersOf(projectId: string) {

@@ -142,6 +142,8 @@ describe("schemes API", () => {
     expect(original.json.scheme.document.divisions[0].stops).toHaveLength(4);
     const listed = await api(`/api/projects/${project.id}`, { cookie });
     expect(listed.json.schemes.map((s: { name: string; stopCount: number }) => [s.name, s.stopCount])).toEqual([["Scheme A", 6], ["Scheme B", 2]]);
+    const all = await api("/api/projects", { cookie });
+    expect(all.json.projects.find((p: { id: string }) => p.id === project.id).schemeCount).toBe(2);
   });
 
   it("answers 404 for a scheme that does not exist and 400 for a body that is not JSON", async () => {
