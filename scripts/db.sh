@@ -11,7 +11,8 @@ cmd=${1:-status}
 mode=demo
 [ "${2:-}" = "--test" ] && mode=test
 
-if [ "$mode" = test ]; then port=${PG_TEST_PORT:-54339}; name=pg-test; else port=${PG_PORT:-54329}; name=pg; fi
+# PG_TEST_PORT / PG_TEST_NAME give the benchmark a throwaway cluster of its own beside the tests'.
+if [ "$mode" = test ]; then port=${PG_TEST_PORT:-54339}; name=${PG_TEST_NAME:-pg-test}; else port=${PG_PORT:-54329}; name=pg; fi
 data="$root_dir/.data/$name"
 
 ensure_postgres() {

@@ -5,7 +5,6 @@ import {
   DndContext,
   DragOverlay,
   KeyboardSensor,
-  MeasuringStrategy,
   PointerSensor,
   pointerWithin,
   useSensor,
@@ -144,7 +143,6 @@ export function DivisionBoard({
       id="scheme-board"
       sensors={sensors}
       collisionDetection={collision}
-      measuring={{ droppable: { strategy: MeasuringStrategy.Always } }}
       onDragStart={onDragStart}
       onDragOver={onDragOver}
       onDragEnd={onDragEnd}

@@ -106,7 +106,7 @@ export function DivisionColumn({
               divisionName={division.name}
               editable={editable}
               disabledDrop={activeType === "division"}
-              onEdit={() => onEditStop(s.id)}
+              onEdit={onEditStop}
             />
           ))}
           {division.stops.length === 0 && <li className="rounded border border-dashed border-tin-rule px-2 py-3 text-center text-xs text-tin">No stops yet{editable ? " — add one or drag one here" : ""}.</li>}

@@ -86,6 +86,9 @@ export function SchemeEditor({
     setNotice(label);
   }, []);
   const undo = useCallback(() => dispatch({ type: "undo" }), []);
+  // Stable, so the memoised stop cards do not re-render when the editor does; the stop's
+  // division is looked up when the form opens.
+  const editStop = useCallback((stopId: string) => setEditing({ kind: "stop", divisionId: "", stopId, newId: "" }), []);
   const redo = useCallback(() => dispatch({ type: "redo" }), []);
 
   const pipesById = useMemo(() => stopPipesById(figures) as Map<string, StopPipes>, [figures]);
@@ -133,7 +136,7 @@ export function SchemeEditor({
 
   const editingStop = editing?.kind === "stop" && editing.stopId ? findStop(doc, editing.stopId) : null;
   const editingDivision = editing?.kind === "division" && editing.divisionId ? doc.divisions.find((d) => d.id === editing.divisionId) : undefined;
-  const targetDivision = editing?.kind === "stop" ? doc.divisions.find((d) => d.id === editing.divisionId) : undefined;
+  const targetDivision = editing?.kind === "stop" ? (editingStop?.division ?? doc.divisions.find((d) => d.id === editing.divisionId)) : undefined;
 
   return (
     <div className="space-y-3">
@@ -263,10 +266,7 @@ export function SchemeEditor({
                   onChange={edit}
                   onEditDivision={(divisionId) => setEditing({ kind: "division", divisionId, newId: "" })}
                   onAddStop={(divisionId) => setEditing({ kind: "stop", divisionId, newId: newId("stop") })}
-                  onEditStop={(stopId) => {
-                    const f = findStop(doc, stopId);
-                    if (f) setEditing({ kind: "stop", divisionId: f.division.id, stopId, newId: "" });
-                  }}
+                  onEditStop={editStop}
                 />
               ))}
             {tab === "chests" && <ChestsView figures={figures} />}

@@ -1,0 +1,32 @@
+#!/usr/bin/env bash
+# npm run bench: the estimator's benchmark, then the editor's (a production build on a throwaway
+# database with the demo data: scheme API reads, and drag-and-drop moves to a figures update).
+set -uo pipefail
+cd "$(dirname "$0")/.."
+source scripts/setup.sh
+
+ensure_apt postgresql chromium fonts-dejavu-core fonts-liberation || exit 1
+ensure_node_modules || exit 1
+
+echo "── estimator"
+node_modules/.bin/tsx scripts/bench.ts || exit 1
+
+echo "── editor"
+export PG_TEST_PORT=54349 PG_TEST_NAME=pg-bench
+port=3200
+export DATABASE_URL=$(bash scripts/db.sh url --test)
+export NEXTAUTH_URL=http://127.0.0.1:$port NEXTAUTH_SECRET=stopwright-bench-secret-$(date +%s) NEXT_DIST_DIR=.next-bench
+export BENCH_BASE_URL=$NEXTAUTH_URL
+server_pid=""
+cleanup() {
+  [ -n "$server_pid" ] && kill "$server_pid" 2>/dev/null && wait "$server_pid" 2>/dev/null
+  bash scripts/db.sh stop --test >/dev/null 2>&1
+}
+trap cleanup EXIT
+bash scripts/db.sh start --test >/dev/null || exit 1
+node_modules/.bin/tsx scripts/migrate.ts >/dev/null && node_modules/.bin/tsx db/seed.ts >/dev/null || exit 1
+node_modules/.bin/next build > /dev/null 2>&1 || { echo "build failed"; exit 1; }
+node_modules/.bin/next start -H 127.0.0.1 -p "$port" > /dev/null 2>&1 &
+server_pid=$!
+for _ in $(seq 1 60); do curl -sf "$NEXTAUTH_URL/api/health" >/dev/null && break; sleep 0.5; done
+node_modules/.bin/tsx scripts/bench-editor.ts
