@@ -7,6 +7,6 @@ import { estimateDocument, withoutMoney } from "@/lib/spec/estimate";
 export const GET = route<undefined, { schemeId: string }>({ permission: "estimate:read" }, async ({ user, params }) => {
   const scheme = await getSchemeForUser({ user, schemeId: params.schemeId });
   const result = estimateDocument(scheme.document, scheme.tuning);
-  if (!result.ok) throw new AppError("invalid", "This scheme cannot be estimated yet.", { document: result.messages });
+  if (!result.ok) throw new AppError("invalid", "This scheme cannot be estimated yet.", { document: [...result.messages] });
   return { version: scheme.version, estimate: can(user.role, "money:read") ? result.estimate : withoutMoney(result.estimate) };
 });
