@@ -1,6 +1,6 @@
 /** Project shapes shared by forms, the API and the pages. Pure. */
 import { z } from "zod";
-import type { SchemeStatus } from "./document";
+import type { SchemeRead } from "./document";
 
 export const projectStatuses = ["enquiry", "design", "tender", "contracted", "workshop", "site", "complete"] as const;
 export type ProjectStatus = (typeof projectStatuses)[number];
@@ -48,15 +48,8 @@ export type ProjectMember = { id: string; name: string; email: string; role: str
 
 export type ProjectRead = ProjectSummary & { pitchHz: number; temperatureC: number; notes: string; members: ProjectMember[] };
 
-export type SchemeSummary = {
-  id: string;
-  name: string;
-  description: string;
-  status: SchemeStatus;
-  sharedWithClient: boolean;
-  version: number;
-  copiedFromId: string | null;
-  updatedAt: string;
+/** A scheme as a project's list shows it: its row, without the document. */
+export type SchemeSummary = Omit<SchemeRead, "projectId" | "updatedByName" | "tuning" | "document"> & {
   stopCount: number;
   divisionCount: number;
 };
