@@ -8,7 +8,7 @@ const config = [
     // `_name` marks a value taken apart on purpose and left unused.
     rules: { "@typescript-eslint/no-unused-vars": ["warn", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_" }] },
   },
-  { ignores: [".next/**", ".next-test/**", ".next-dev-test/**", "next-env.d.ts", ".data/**", "test-results/**", "playwright-report/**"] },
+  { ignores: [".next*/**", "next-env.d.ts", ".data/**", "test-results/**", "playwright-report/**"] },
 ];
 
 export default config;
