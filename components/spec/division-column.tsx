@@ -80,7 +80,7 @@ export function DivisionColumn({
           )}
           {figures && (
             <span className="num text-tin">
-              {division.stops.length} stops · {formatNumber(figures.pipes.total)} pipes
+              {division.stops.length} {division.stops.length === 1 ? "stop" : "stops"} · {formatNumber(figures.pipes.total)} {figures.pipes.total === 1 ? "pipe" : "pipes"}
             </span>
           )}
         </div>

@@ -7,13 +7,14 @@ import { chestWords, fitState } from "./chest-words";
 import { formatNumber } from "./format";
 import type { Figures } from "./use-figures";
 
+/**
+ * An exact decimal amount as written, to the cent, grouped with thin spaces: never through a
+ * float and never rounded further, so the lines shown add up to the total shown.
+ */
 function money(amount: string, currency: string): string {
-  const n = Number(amount);
-  try {
-    return n.toLocaleString("en-GB", { style: "currency", currency, maximumFractionDigits: 0 }).replace(/,/g, "\u202f");
-  } catch {
-    return `${currency} ${formatNumber(n)}`;
-  }
+  const [whole, cents = "00"] = amount.replace(/^-/, "").split(".");
+  const grouped = whole!.replace(/\B(?=(\d{3})+(?!\d))/g, "\u202f");
+  return `${amount.startsWith("-") ? "−" : ""}${currency === "EUR" ? "€" : `${currency} `}${grouped}.${cents}`;
 }
 
 function Row({ label, value, strong = false, testId }: { label: string; value: string; strong?: boolean; testId?: string }) {
@@ -108,10 +109,14 @@ export function FiguresPanel({ figures, showMoney }: { figures: Figures; showMon
         {showMoney && (
           <div>
             <h3 className="label">Money</h3>
-          <dl>
+          <dl data-testid="money-lines">
             <Row label="Labour" value={money(e.money.labourAmount, e.money.currency)} />
             <Row label="Materials" value={money(e.money.materialsAmount, e.money.currency)} />
-            <Row label="Total with tax" value={money(e.money.totalAmount, e.money.currency)} strong testId="fig-money" />
+            <Row label={`Overheads ${e.money.overhead.percent} %`} value={money(e.money.overhead.amount, e.money.currency)} />
+            <Row label={`Contingency ${e.money.contingency.percent} %`} value={money(e.money.contingency.amount, e.money.currency)} />
+            <Row label={`Margin ${e.money.margin.percent} %`} value={money(e.money.margin.amount, e.money.currency)} />
+            <Row label={`Tax ${e.money.tax.percent} %`} value={money(e.money.tax.amount, e.money.currency)} />
+            <Row label="Total" value={money(e.money.totalAmount, e.money.currency)} strong testId="fig-money" />
           </dl>
             <p className="mt-1 text-[11px] text-tin">From the firm&apos;s rates ({e.ratesProvenance}).</p>
           </div>

@@ -290,7 +290,8 @@ export function SchemeEditor({
                 setNotice(`Restored version ${from} as version ${scheme.version}. Undo brings back what you had.`);
               }}
               onConflict={(current) => {
-                if (current) setNotice(`Someone else saved version ${current.version}; reload the page to see it.`);
+                if (current) save.reportConflict(current);
+                else setNotice("Someone else saved meanwhile; reload the page to see their version.");
               }}
             />
           )}

@@ -166,5 +166,8 @@ export function useSchemeSave({
     [saveNow, setState, setVer],
   );
 
-  return { state, version, saveNow, acceptServer, saveOver };
+  /** Someone else saved first (found by another request, e.g. a restore): offer the same choice as a save would. */
+  const reportConflict = useCallback((current: SchemeRead) => setState({ kind: "conflict", current }), [setState]);
+
+  return { state, version, saveNow, acceptServer, saveOver, reportConflict };
 }
