@@ -8,7 +8,8 @@ export async function GET() {
     await pool.query("select 1");
     return Response.json({ status: "ok", database: "reachable" });
   } catch (err) {
-    const reason = err instanceof Error ? err.message : String(err);
-    return Response.json({ status: "unavailable", database: "unreachable", reason }, { status: 503 });
+    // The cause goes to the server log; the public answer does not show addresses.
+    console.error("health check: database unreachable:", err instanceof Error ? err.message : err);
+    return Response.json({ status: "unavailable", database: "unreachable", reason: "The database did not answer." }, { status: 503 });
   }
 }
