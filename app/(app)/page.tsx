@@ -1,7 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { roleLabels, type Role } from "@/lib/roles";
+import { listProjectsForUser } from "@/db/queries/projects";
+import { can, roleLabels, type Role } from "@/lib/roles";
 import { requirePageUser } from "@/lib/server/guard";
+import { projectStatusLabels } from "@/lib/spec/projects";
 
 export const metadata: Metadata = { title: "Home" };
 
@@ -34,13 +36,14 @@ const homes: Record<Role, { heading: string; lead: string; tiles: Tile[] }> = {
   client: {
     heading: "Your organ committee",
     lead: "The schemes your organ builder has shared with you, to compare and comment on.",
-    tiles: [{ title: "Shared schemes", text: "Nothing has been shared with you yet.", href: "/projects" }],
+    tiles: [],
   },
 };
 
 export default async function HomePage() {
   const user = await requirePageUser();
   const home = homes[user.role];
+  const projects = can(user.role, "projects:read") ? (await listProjectsForUser({ user })).slice(0, 6) : [];
   return (
     <div className="space-y-6" data-testid={`home-${user.role}`}>
       <div>
@@ -63,6 +66,29 @@ export default async function HomePage() {
           ),
         )}
       </div>
+      <section aria-labelledby="recent-heading">
+        <h2 id="recent-heading" className="mb-2 text-xl font-semibold">{user.role === "client" ? "Your projects" : "Recent projects"}</h2>
+        {projects.length === 0 ? (
+          <p className="text-sm text-ink-soft">
+            {user.role === "client" ? "Nothing has been shared with you yet." : "No projects yet."}
+          </p>
+        ) : (
+          <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+            {projects.map((p) => (
+              <li key={p.id}>
+                <Link href={`/projects/${p.id}`} className="panel block p-4 hover:border-brass" data-testid={`home-project-${p.name}`}>
+                  <span className="block font-serif text-lg font-semibold">{p.name}</span>
+                  <span className="block text-sm text-ink-soft">{p.clientName}</span>
+                  <span className="mt-1 block text-xs text-tin">
+                    {projectStatusLabels[p.status]} · {p.schemeCount} {p.schemeCount === 1 ? "scheme" : "schemes"}
+                    {user.role === "client" ? " shared with you" : ""}
+                  </span>
+                </Link>
+              </li>
+            ))}
+          </ul>
+        )}
+      </section>
     </div>
   );
 }

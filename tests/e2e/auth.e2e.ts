@@ -13,6 +13,8 @@ for (const role of roles) {
     await expect(page.getByTestId("user-role")).not.toBeEmpty();
     // Only an admin is offered the users page.
     await expect(page.getByRole("link", { name: "Users", exact: true })).toHaveCount(role === "admin" ? 1 : 0);
+    // A new committee member belongs to no project yet, and is told so.
+    if (role === "client") await expect(page.getByText("Nothing has been shared with you yet.")).toBeVisible();
   });
 }
 

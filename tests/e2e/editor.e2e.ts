@@ -314,7 +314,12 @@ test.describe("read-only roles", () => {
     const client = await makeUser("client");
     expect((await api(`/api/projects/${projectId}/members`, { method: "POST", cookie, body: { email: client.email } })).status).toBe(200);
 
-    await openAs(page, client, `/projects/${projectId}`);
+    // Home lists the project, counting only what is shared with the committee.
+    await openAs(page, client, "/");
+    await expect(page.locator('[data-testid^="home-project-"]')).toHaveCount(1);
+    await expect(page.locator('[data-testid^="home-project-"]')).toContainText("1 scheme shared with you");
+
+    await page.goto(`/projects/${projectId}`);
     const schemes = page.getByTestId("schemes-table");
     await expect(schemes.getByTestId("scheme-Shared scheme")).toBeVisible();
     await expect(schemes.getByTestId("scheme-Unshared scheme")).toHaveCount(0);
