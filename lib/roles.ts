@@ -21,6 +21,8 @@ export const permissions = [
   "projects:edit",
   "schemes:edit",
   "schemes:read",
+  /** Earlier versions with their authors and notes: the firm's working history, not the committee's. */
+  "revisions:read",
   "estimate:read",
   "money:read",
   "rates:manage",
@@ -31,9 +33,9 @@ export type Permission = (typeof permissions)[number];
 
 const grants: Record<Role, readonly Permission[]> = {
   admin: permissions,
-  designer: ["projects:create", "projects:read", "projects:edit", "schemes:edit", "schemes:read", "estimate:read", "money:read", "notes:write"],
-  estimator: ["projects:read", "schemes:read", "estimate:read", "money:read", "rates:manage", "quotes:issue", "notes:write"],
-  workshop: ["projects:read", "schemes:read", "estimate:read", "notes:write"],
+  designer: ["projects:create", "projects:read", "projects:edit", "schemes:edit", "schemes:read", "revisions:read", "estimate:read", "money:read", "notes:write"],
+  estimator: ["projects:read", "schemes:read", "revisions:read", "estimate:read", "money:read", "rates:manage", "quotes:issue", "notes:write"],
+  workshop: ["projects:read", "schemes:read", "revisions:read", "estimate:read", "notes:write"],
   // Clients see only shared schemes of their own projects, and never rates or margins.
   client: ["projects:read", "schemes:read"],
 };

@@ -26,6 +26,7 @@ trap cleanup EXIT
 bash scripts/db.sh start --test >/dev/null || exit 1
 node_modules/.bin/tsx scripts/migrate.ts >/dev/null && node_modules/.bin/tsx db/seed.ts >/dev/null || exit 1
 node_modules/.bin/next build > /dev/null 2>&1 || { echo "build failed"; exit 1; }
+if curl -s -o /dev/null "$NEXTAUTH_URL/api/health"; then echo "error: port $port is already in use; stop what listens there" >&2; exit 1; fi
 node_modules/.bin/next start -H 127.0.0.1 -p "$port" > /dev/null 2>&1 &
 server_pid=$!
 for _ in $(seq 1 60); do curl -sf "$NEXTAUTH_URL/api/health" >/dev/null && break; sleep 0.5; done

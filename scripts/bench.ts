@@ -5,12 +5,13 @@
  * mouth width, sheet mass) for the large scheme's pipes.
  * Targets (issue 3): large < 2 ms median; 2× size ≤ 2.3× time; ratio to the floor aim < 5×.
  */
+import { DEFAULT_RATES } from "../lib/estimate/demo-rates";
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { estimateScheme, parseSchemeFile, planScheme, rankGeometry, speedOfSoundMPerS, type Rates, type Scheme } from "@/lib/estimate";
 
 function load(file: string): { scheme: Scheme; rates: Rates } {
-  const r = parseSchemeFile(readFileSync(join(__dirname, "..", "examples", file), "utf8"));
+  const r = parseSchemeFile(readFileSync(join(__dirname, "..", "examples", file), "utf8"), DEFAULT_RATES);
   if (!r.ok) throw new Error(`${file}: ${r.messages.join("; ")}`);
   return { scheme: r.scheme, rates: r.rates };
 }

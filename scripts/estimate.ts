@@ -4,6 +4,7 @@
  * the money lines, the programme and the cautions. A bad file prints its validation messages on
  * stderr and exits 1.
  */
+import { DEFAULT_RATES } from "../lib/estimate/demo-rates";
 import { readFileSync } from "node:fs";
 import { estimateScheme, parseSchemeFile, type Estimate } from "@/lib/estimate";
 
@@ -101,7 +102,7 @@ function main(): number {
     process.stderr.write(`cannot read ${file}: ${(e as NodeJS.ErrnoException).code ?? (e as Error).message}\n`);
     return 1;
   }
-  const r = parseSchemeFile(text);
+  const r = parseSchemeFile(text, DEFAULT_RATES);
   if (!r.ok) {
     process.stderr.write(`${file}: the scheme has ${r.messages.length} problem${r.messages.length === 1 ? "" : "s"}:\n`);
     for (const m of r.messages) process.stderr.write(`  ${m}\n`);

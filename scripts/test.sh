@@ -36,6 +36,8 @@ bash scripts/db.sh start --test || exit 1
 node_modules/.bin/tsx scripts/migrate.ts || exit 1
 if ! node_modules/.bin/next build > "$out/build.log" 2>&1; then cat "$out/build.log"; tally 1 "production build"; else tally 0 "production build"; fi
 
+# Another server on the port would answer in place of this build.
+if curl -s -o /dev/null "$NEXTAUTH_URL/api/health"; then echo "error: port $port is already in use; stop what listens there" >&2; exit 1; fi
 node_modules/.bin/next start -H 127.0.0.1 -p "$port" > "$out/server.log" 2>&1 &
 server_pid=$!
 for _ in $(seq 1 60); do curl -sf "$NEXTAUTH_URL/api/health" >/dev/null && break; sleep 0.5; done

@@ -1,15 +1,16 @@
 "use client";
 import { useMemo } from "react";
 import { ChestDrawing } from "./chest-drawing";
+import type { Rates } from "@/lib/estimate";
 import { layChest } from "./chest-layout";
 import type { Figures } from "./use-figures";
 
 /** A drawing of every division's chest, from the same figures the editor shows. */
-export function ChestsView({ figures }: { figures: Figures }) {
+export function ChestsView({ figures, rates }: { figures: Figures; rates: Rates }) {
   const drawings = useMemo(() => {
     if (!figures.ok) return null;
-    return figures.estimate.divisions.map((d) => ({ d, plan: layChest(figures.scheme, d.id) }));
-  }, [figures]);
+    return figures.estimate.divisions.map((d) => ({ d, plan: layChest(figures.scheme, d.id, rates) }));
+  }, [figures, rates]);
   if (!figures.ok || !drawings) {
     return (
       <div className="panel p-4 text-sm text-caution" data-testid="chests">

@@ -8,6 +8,7 @@ import { Dialog } from "@/components/ui/dialog";
 import { StateMark } from "@/components/ui/state-mark";
 import { schemeDocumentSchema, type SchemeDocument, type SchemeRead } from "@/lib/spec/document";
 import { AccessoriesEditor } from "./accessories-editor";
+import type { Rates } from "@/lib/estimate";
 import { ChestsView } from "./chests-view";
 import { DivisionBoard } from "./division-board";
 import { DivisionForm } from "./division-form";
@@ -64,18 +65,26 @@ export function SchemeEditor({
   projectName,
   editable,
   showMoney,
+  showFigures,
+  canSeeRevisions,
+  rates,
 }: {
   initialScheme: SchemeRead;
   projectId: string;
   projectName: string;
   editable: boolean;
   showMoney: boolean;
+  /** Committee members see the board and the stop list, not the working figures. */
+  showFigures: boolean;
+  canSeeRevisions: boolean;
+  /** As this user may hold them: prices only with money:read (lib/server/rates.ts). */
+  rates: Rates;
 }) {
   const [history, dispatch] = useReducer(historyReducer, initialScheme.document, initHistory);
   const doc = history.present;
   const save = useSchemeSave({ scheme: initialScheme, present: doc, label: history.label, enabled: editable });
   const { saveNow } = save;
-  const figures = useFigures(doc, initialScheme.tuning);
+  const figures = useFigures(doc, initialScheme.tuning, rates);
   const [tab, setTab] = useState<Tab>("stops");
   const [editing, setEditing] = useState<Editing>(null);
   const [showRevisions, setShowRevisions] = useState(false);
@@ -172,9 +181,11 @@ export function SchemeEditor({
               </button>
             </>
           )}
-          <button type="button" className="btn" aria-pressed={showRevisions} onClick={() => setShowRevisions((v) => !v)}>
-            Revisions
-          </button>
+          {canSeeRevisions && (
+            <button type="button" className="btn" aria-pressed={showRevisions} onClick={() => setShowRevisions((v) => !v)}>
+              Revisions
+            </button>
+          )}
           <Link className="btn" href={`/projects/${projectId}/schemes/${initialScheme.id}/stop-list`}>Stop list</Link>
         </div>
       </div>
@@ -269,7 +280,7 @@ export function SchemeEditor({
                   onEditStop={editStop}
                 />
               ))}
-            {tab === "chests" && <ChestsView figures={figures} />}
+            {tab === "chests" && <ChestsView figures={figures} rates={rates} />}
             {tab === "accessories" && (
               <AccessoriesEditor key={save.version + ":" + history.past.length} doc={doc} editable={editable} onApply={(acc) => edit(setAccessories(doc, acc), "Changed couplers and accessories")} />
             )}
@@ -295,7 +306,7 @@ export function SchemeEditor({
               }}
             />
           )}
-          <FiguresPanel figures={figures} showMoney={showMoney} />
+          {showFigures && <FiguresPanel figures={figures} showMoney={showMoney} />}
         </div>
       </div>
 

@@ -1,14 +1,15 @@
 "use client";
 /** The estimator run in the browser on every change of the document: the live figures. */
 import { useMemo } from "react";
+import type { Rates } from "@/lib/estimate";
 import type { SchemeDocument, Tuning } from "@/lib/spec/document";
 import { estimateDocument, type DocumentEstimate } from "@/lib/spec/estimate";
 
 export type Figures = (Extract<DocumentEstimate, { ok: true }> & { ms: number }) | Extract<DocumentEstimate, { ok: false }>;
 
-export function computeFigures(doc: SchemeDocument, tuning: Tuning): Figures {
+export function computeFigures(doc: SchemeDocument, tuning: Tuning, rates: Rates): Figures {
   const t0 = performance.now();
-  const result = estimateDocument(doc, tuning);
+  const result = estimateDocument(doc, tuning, rates);
   return result.ok ? { ...result, ms: performance.now() - t0 } : result;
 }
 
@@ -17,9 +18,9 @@ export function computeFigures(doc: SchemeDocument, tuning: Tuning): Figures {
  * a 150-stop scheme, and edits arrive whole (a drop, a submitted form), never per keystroke, so
  * deferring would only add a frame between a move and its figures.
  */
-export function useFigures(doc: SchemeDocument, tuning: Tuning): Figures {
+export function useFigures(doc: SchemeDocument, tuning: Tuning, rates: Rates): Figures {
   const { pitchHz, temperatureC } = tuning;
-  return useMemo(() => computeFigures(doc, { pitchHz, temperatureC }), [doc, pitchHz, temperatureC]);
+  return useMemo(() => computeFigures(doc, { pitchHz, temperatureC }, rates), [doc, pitchHz, temperatureC, rates]);
 }
 
 /** Pipe counts by stop id, for the stop cards. */

@@ -35,6 +35,11 @@ export async function loadSchemeFor({ user, schemeId, tx = db, lock = false }: {
   return { scheme, project };
 }
 
+/** An archived project is a record: its schemes are read, not changed, until it is brought back. */
+export function assertOpen(project: Project): void {
+  if (project.archivedAt) throw new AppError("conflict", "This project is archived; bring it back from the archive to change its schemes.");
+}
+
 export function isUuid(value: string): boolean {
   return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(value);
 }

@@ -75,7 +75,8 @@ async function readProject(p: Project, user: SessionUser): Promise<{ project: Pr
     : [];
   const stopsBy = new Map(stopCounts.map((r) => [r.schemeId, r.n]));
   const divisionsBy = new Map(divisionCounts.map((r) => [r.schemeId, r.n]));
-  const members = await membersOf(p.id);
+  // Committee members see who is on the project, but only their own e-mail address.
+  const members = (await membersOf(p.id)).map((m) => (user.role === "client" && m.id !== user.id ? { ...m, email: "" } : m));
   return {
     project: { ...summary(p, schemeRows.length), pitchHz: p.pitchHz, temperatureC: p.temperatureC, notes: user.role === "client" ? "" : p.notes, members },
     schemes: schemeRows.map((s) => ({
@@ -85,7 +86,7 @@ async function readProject(p: Project, user: SessionUser): Promise<{ project: Pr
       status: s.status,
       sharedWithClient: s.sharedWithClient,
       version: s.version,
-      copiedFromId: s.copiedFromId,
+      copiedFromId: user.role === "client" ? null : s.copiedFromId,
       updatedAt: s.updatedAt.toISOString(),
       stopCount: stopsBy.get(s.id) ?? 0,
       divisionCount: divisionsBy.get(s.id) ?? 0,

@@ -7,7 +7,7 @@ import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
 import { schemeDocumentSchema, type SchemeDocument, type SchemeRead, type SchemeStatus } from "@/lib/spec/document";
 import { checkDocument } from "@/lib/spec/validate";
-import { loadProjectFor, loadSchemeFor } from "./access";
+import { assertOpen, loadProjectFor, loadSchemeFor } from "./access";
 
 async function toRead(tx: Store, scheme: Scheme, project: Project): Promise<SchemeRead> {
   const [document, author] = await Promise.all([
@@ -38,21 +38,31 @@ function validated(raw: unknown): SchemeDocument {
 
 // ── public queries ───────────────────────────────────────────────────────────────────────────
 
+// One snapshot for the scheme row and its divisions and stops, so a save landing between the
+// queries cannot give a half-old, half-new document.
+const snapshot = { isolationLevel: "repeatable read", accessMode: "read only" } as const;
+
 export async function getSchemeForUser({ user, schemeId }: { user: SessionUser; schemeId: string }): Promise<SchemeRead> {
-  const { scheme, project } = await loadSchemeFor({ user, schemeId });
-  return toRead(db, scheme, project);
+  const read = await db.transaction(async (tx) => {
+    const { scheme, project } = await loadSchemeFor({ user, schemeId, tx });
+    return toRead(tx, scheme, project);
+  }, snapshot);
+  // A committee member is not told which (perhaps unshared) scheme this one was copied from.
+  return user.role === "client" ? { ...read, copiedFromId: null } : read;
 }
 
 export async function createScheme({ user, projectId, name, description = "", document }: { user: SessionUser; projectId: string; name: string; description?: string; document?: unknown }): Promise<SchemeRead> {
   const project = await loadProjectFor({ user, projectId });
+  assertOpen(project);
   const doc = validated({ ...((document as object | undefined) ?? { divisions: [] }), name, description });
   return db.transaction(async (tx) => toRead(tx, await insertScheme(tx, { projectId, document: doc, authorId: user.id, note: "created" }), project));
 }
 
 export async function duplicateScheme({ user, schemeId, name }: { user: SessionUser; schemeId: string; name: string }): Promise<SchemeRead> {
-  const { scheme, project } = await loadSchemeFor({ user, schemeId });
-  const source = await loadDocument(db, scheme);
   return db.transaction(async (tx) => {
+    const { scheme, project } = await loadSchemeFor({ user, schemeId, tx });
+    assertOpen(project);
+    const source = await loadDocument(tx, scheme);
     const copy = await insertScheme(tx, { projectId: project.id, document: { ...source, name }, authorId: user.id, copiedFromId: scheme.id, note: `copied from "${scheme.name}"` });
     return toRead(tx, copy, project);
   });
@@ -66,6 +76,7 @@ export async function saveScheme({ user, schemeId, version, document, note = "" 
   const doc = validated(document);
   return db.transaction(async (tx) => {
     const { scheme, project } = await loadSchemeFor({ user, schemeId, tx, lock: true });
+    assertOpen(project);
     if (scheme.version !== version) {
       const current = await toRead(tx, scheme, project);
       throw new AppError(

@@ -1,3 +1,4 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import { CAUTION_TEXT, cautionsFor } from "./cautions";
 import { estimateScheme } from "./estimate";
@@ -16,11 +17,11 @@ describe("cautions", () => {
   });
 
   it("warns of lead for tin–lead pipe metal and of mains for electric action", () => {
-    const leaded = estimateScheme(scheme([manual("gt", [stop("p", 8, { material: "spotted" })], { action: "electric" })]));
+    const leaded = estimateScheme(scheme([manual("gt", [stop("p", 8, { material: "spotted" })], { action: "electric" })]), DEFAULT_RATES);
     expect(leaded.cautions.map((c) => c.code)).toEqual(["lead", "mains", "site"]);
-    const unleaded = estimateScheme(scheme([manual("gt", [stop("p", 8, { material: "zinc" }), stop("f", 4, { material: "oak" })])]));
+    const unleaded = estimateScheme(scheme([manual("gt", [stop("p", 8, { material: "zinc" }), stop("f", 4, { material: "oak" })])]), DEFAULT_RATES);
     expect(unleaded.cautions.map((c) => c.code)).toEqual(["site"]);
-    const oldPipes = estimateScheme(scheme([manual("gt", [stop("p", 8, { material: "zinc", treatment: "restored" })])]));
+    const oldPipes = estimateScheme(scheme([manual("gt", [stop("p", 8, { material: "zinc", treatment: "restored" })])]), DEFAULT_RATES);
     expect(oldPipes.cautions.map((c) => c.code)).toContain("lead"); // existing pipe metal may hold lead whatever is recorded
   });
 });

@@ -1,6 +1,6 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import { chestFit, chestSize, clearanceMm, pipeRowWidthMm, type ChestRow } from "./chest";
-import { DEFAULT_RATES } from "./rates";
 import { estimateScheme } from "./estimate";
 import { manual, scheme, stop } from "./test-support/schemes";
 
@@ -66,7 +66,7 @@ describe("chest space of a division", () => {
   });
 
   it("grows the chest when a rank is added and reports the fit against the space", () => {
-    const one = estimateScheme(scheme([manual("gt", [stop("p8", 8)], { space: { lengthMm: 4800, depthMm: 900 } })])).divisions[0].chest;
+    const one = estimateScheme(scheme([manual("gt", [stop("p8", 8)], { space: { lengthMm: 4800, depthMm: 900 } })]), DEFAULT_RATES).divisions[0].chest;
     const two = estimateOf(0);
     expect(two.main.depthMm).toBeGreaterThan(one.main.depthMm);
     expect(one.fit!.depthMarginMm).toBeGreaterThan(two.fit!.depthMarginMm);

@@ -1,3 +1,4 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import Decimal from "decimal.js";
 import { compareSchemes, compareStops } from "./compare";
@@ -28,9 +29,9 @@ describe("comparing schemes", () => {
   });
 
   it("gives every total as the second minus the first", () => {
-    const c = compareSchemes(a, b);
-    const ea = estimateScheme(a);
-    const eb = estimateScheme(b);
+    const c = compareSchemes(a, b, DEFAULT_RATES);
+    const ea = estimateScheme(a, DEFAULT_RATES);
+    const eb = estimateScheme(b, DEFAULT_RATES);
     expect(c.totals.pipes.total).toBe(eb.totals.pipes.total - ea.totals.pipes.total);
     expect(c.totals.pipes.new).toBe(eb.totals.pipes.new - ea.totals.pipes.new);
     expect(c.totals.pipes.restored).toBe(61);
@@ -41,7 +42,7 @@ describe("comparing schemes", () => {
   });
 
   it("finds nothing between a scheme and itself", () => {
-    const c = compareSchemes(a, a);
+    const c = compareSchemes(a, a, DEFAULT_RATES);
     expect(c.stops).toEqual({ added: [], removed: [], changed: [] });
     expect(c.totals.pipes.total).toBe(0);
     expect(c.money.total.diffAmount).toBe("0.00");

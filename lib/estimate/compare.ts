@@ -5,7 +5,6 @@
  */
 import type { Scheme, Stop } from "./scheme";
 import type { Rates } from "./rates";
-import { DEFAULT_RATES } from "./rates";
 import { estimateScheme, type Estimate } from "./estimate";
 import { departments, type Department } from "./labour";
 import { metals, woods, type Metal, type Wood } from "./materials";
@@ -184,6 +183,6 @@ export function compareEstimates(ea: Estimate, eb: Estimate): Omit<Comparison, "
 }
 
 /** Compares scheme b with scheme a: stops and every total (b − a), both estimated with the same rates. */
-export function compareSchemes(a: Scheme, b: Scheme, rates: Rates = DEFAULT_RATES): Comparison {
+export function compareSchemes(a: Scheme, b: Scheme, rates: Rates): Comparison {
   return { ...compareEstimates(estimateScheme(a, rates), estimateScheme(b, rates)), stops: compareStops(a, b) };
 }

@@ -1,3 +1,4 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import Decimal from "decimal.js";
@@ -5,7 +6,6 @@ import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { estimateScheme, SchemeError } from "./estimate";
 import { parseSchemeFile } from "./validate";
-import { DEFAULT_RATES } from "./rates";
 import { departments } from "./labour";
 import { metals } from "./materials";
 import { pureMinusTemperedCents } from "./pitch";
@@ -13,7 +13,7 @@ import { arbScheme, manual, pedal, scheme, stop } from "./test-support/schemes";
 import type { Scheme } from "./scheme";
 
 function example(file: string) {
-  const r = parseSchemeFile(readFileSync(join(__dirname, "../../examples", file), "utf8"));
+  const r = parseSchemeFile(readFileSync(join(__dirname, "../../examples", file), "utf8"), DEFAULT_RATES);
   if (!r.ok) throw new Error(r.messages.join("\n"));
   return r;
 }
@@ -86,7 +86,7 @@ describe("totals", () => {
 
 describe("behaviour", () => {
   const nazard = (mutations: "tempered" | "pure") =>
-    estimateScheme(scheme([manual("sw", [stop("n", "2 2/3", { family: "mutation" })])], { tuning: { pitchHz: 440, temperatureC: 18, mutations } })).divisions[0].stops[0];
+    estimateScheme(scheme([manual("sw", [stop("n", "2 2/3", { family: "mutation" })])], { tuning: { pitchHz: 440, temperatureC: 18, mutations } }), DEFAULT_RATES).divisions[0].stops[0];
 
   it("tunes mutations tempered by default and pure on request: a pure twelfth is 1.96 cents sharp", () => {
     const t = nazard("tempered").lowestFrequencyHz!;
@@ -97,7 +97,7 @@ describe("behaviour", () => {
 
   it("lowers every pipe with a lower pitch and lengthens it in warmer air", () => {
     const at = (pitchHz: number, temperatureC: number) =>
-      estimateScheme(scheme([manual("gt", [stop("p", 8)])], { tuning: { pitchHz, temperatureC, mutations: "tempered" } })).divisions[0].stops[0];
+      estimateScheme(scheme([manual("gt", [stop("p", 8)])], { tuning: { pitchHz, temperatureC, mutations: "tempered" } }), DEFAULT_RATES).divisions[0].stops[0];
     expect(at(415, 18).lowestFrequencyHz!).toBeLessThan(at(440, 18).lowestFrequencyHz!);
     expect(at(415, 18).longestSpeakingLengthMm!).toBeGreaterThan(at(440, 18).longestSpeakingLengthMm!);
     expect(at(440, 25).longestSpeakingLengthMm!).toBeGreaterThan(at(440, 15).longestSpeakingLengthMm!);
@@ -109,7 +109,7 @@ describe("behaviour", () => {
       manual("gt", [stop("p", 8)], { action: "electric" }),
       pedal("pd", [stop("b", 8, { treatment: "borrowed", source: "p" }), stop("x", 4, { treatment: "prepared" })], { action: "electric" }),
     ]);
-    const [a, b] = [estimateScheme(base), estimateScheme(more)];
+    const [a, b] = [estimateScheme(base, DEFAULT_RATES), estimateScheme(more, DEFAULT_RATES)];
     expect(b.totals.hours.metalPipes).toBe(a.totals.hours.metalPipes);
     expect(b.totals.pipes.total).toBe(a.totals.pipes.total);
     expect(b.totals.pipes.prepared).toBe(32);
@@ -117,7 +117,7 @@ describe("behaviour", () => {
   });
 
   it("costs more to make pipes new than to restore them", () => {
-    const cost = (treatment: "new" | "restored") => estimateScheme(scheme([manual("gt", [stop("p", 8, { treatment }), stop("o", 4, { treatment })])])).money.totalAmount;
+    const cost = (treatment: "new" | "restored") => estimateScheme(scheme([manual("gt", [stop("p", 8, { treatment }), stop("o", 4, { treatment })])]), DEFAULT_RATES).money.totalAmount;
     expect(new Decimal(cost("new")).greaterThan(cost("restored"))).toBe(true);
   });
 
@@ -126,7 +126,7 @@ describe("behaviour", () => {
       manual("gt", [stop("d16", 16)], { chest: "direct-electric", action: "electric" }),
       pedal("pd", [stop("d8", 8, { treatment: "extension", source: "d16" })], { action: "electric" }),
     ]);
-    const e = estimateScheme(s);
+    const e = estimateScheme(s, DEFAULT_RATES);
     expect(e.divisions[1].pipes.new).toBe(0); // a 32-note 8′ from a 61-note 16′ shares every pipe
     expect(e.divisions[1].chest.main.rows).toBe(0);
     expect(e.divisions[0].chest.main.rows).toBe(1);
@@ -134,9 +134,9 @@ describe("behaviour", () => {
 
   it("refuses an inconsistent scheme with its messages", () => {
     const bad = scheme([manual("gt", [stop("e", 8, { treatment: "extension", source: "nowhere" })])]);
-    expect(() => estimateScheme(bad)).toThrow(SchemeError);
+    expect(() => estimateScheme(bad, DEFAULT_RATES)).toThrow(SchemeError);
     try {
-      estimateScheme(bad);
+      estimateScheme(bad, DEFAULT_RATES);
     } catch (err) {
       expect((err as SchemeError).messages).toEqual(['Division "gt", stop "e": extension source "nowhere" does not exist']);
     }
@@ -148,7 +148,7 @@ describe("properties", () => {
     fc.assert(
       fc.property(arbScheme, (s: Scheme) => {
         const frozen = deepFreeze(structuredClone(s));
-        return JSON.stringify(estimateScheme(frozen)) === JSON.stringify(estimateScheme(s));
+        return JSON.stringify(estimateScheme(frozen, DEFAULT_RATES)) === JSON.stringify(estimateScheme(s, DEFAULT_RATES));
       }),
       { numRuns: 100 },
     );
@@ -157,7 +157,7 @@ describe("properties", () => {
   it("never gives negative pipes, hours, metal or weeks", () => {
     fc.assert(
       fc.property(arbScheme, (s) => {
-        const e = estimateScheme(s);
+        const e = estimateScheme(s, DEFAULT_RATES);
         const numbers = [
           ...Object.values(e.totals.pipes), ...Object.values(e.totals.hours), ...Object.values(e.totals.metalKg), ...Object.values(e.totals.woodM3),
           e.totals.wiring.conductorLengthM, e.programme.totalWeeks, ...e.divisions.flatMap((d) => [d.chest.main.lengthMm, d.chest.main.depthMm]),

@@ -5,7 +5,7 @@
  * scheme the labour, wiring, money and programme from the aggregates.
  */
 import type { Scheme } from "./scheme";
-import { DEFAULT_RATES, type Rates } from "./rates";
+import type { Rates } from "./rates";
 import { planScheme, addCounts, NO_PIPES, type PipeCounts, type SchemePlan, type StopKind } from "./pipes";
 import { rankGeometry, type RankGeometry } from "./geometry";
 import { MIN_LENGTH_FRACTION, speedOfSoundMPerS } from "./acoustics";
@@ -150,10 +150,10 @@ function recordOf<K extends string>(keys: readonly K[], f: (k: K) => number): Re
 }
 
 /**
- * Estimates a scheme with the firm's rates and norms (DEFAULT_RATES, invented demo values, if none).
+ * Estimates a scheme with the firm's rates and norms (demo-rates.ts holds invented defaults).
  * Pure and deterministic. The scheme must be one parseScheme accepted; otherwise throws SchemeError.
  */
-export function estimateScheme(scheme: Scheme, rates: Rates = DEFAULT_RATES, plan: SchemePlan = planScheme(scheme)): Estimate {
+export function estimateScheme(scheme: Scheme, rates: Rates, plan: SchemePlan = planScheme(scheme)): Estimate {
   if (plan.messages.length) throw new SchemeError(plan.messages);
   const nStops = plan.stops.length;
   const nRows = plan.rows.length;

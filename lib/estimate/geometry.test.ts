@@ -1,9 +1,9 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { midiToFreq } from "@tonaljs/midi";
 import { MSG_NO_SUCH_STOP, pipesOfStop } from "./geometry";
-import { DEFAULT_RATES } from "./rates";
 import { estimateScheme } from "./estimate";
 import { parseSchemeFile } from "./validate";
 import { alloyDensityGCm3, bodyAreaFactor, sheetAreaMm2 } from "./materials";
@@ -71,7 +71,7 @@ describe("pipes of a stop", () => {
 });
 
 describe("the estimator's loop agrees with the pipes computed one by one", () => {
-  const file = parseSchemeFile(readFileSync(join(__dirname, "../../examples/large-five-manual.json"), "utf8"));
+  const file = parseSchemeFile(readFileSync(join(__dirname, "../../examples/large-five-manual.json"), "utf8"), DEFAULT_RATES);
   if (!file.ok) throw new Error(file.messages.join("\n"));
   const large = file.scheme;
   const e = estimateScheme(large, file.rates);

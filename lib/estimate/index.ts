@@ -5,7 +5,7 @@
 export * from "./scheme";
 export { describeIssue, parseScheme, parseSchemeFile, type ParseResult, type ParseFileResult } from "./validate";
 export { estimateScheme, SchemeError, type Estimate, type DivisionEstimate, type StopEstimate, type DivisionChest } from "./estimate";
-export { DEFAULT_RATES, parseRates, ratesSchema, normsSchema, type Rates, type RatesInput, type Norms, type RatesResult } from "./rates";
+export { parseRates, ratesSchema, normsSchema, withoutPrices, type Rates, type RatesInput, type Norms, type RatesResult } from "./rates";
 export { pipesOfStop, rankGeometry, type PipeDetail, type PipeState, type RankGeometry } from "./geometry";
 export { compareSchemes, compareEstimates, type Comparison } from "./compare";
 export { planScheme, countPipes, type PipeCounts, type PlanIssue, type SchemePlan, type StopKind } from "./pipes";

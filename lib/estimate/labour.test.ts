@@ -1,6 +1,6 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import { addConsoleHours, addDivisionHours, addPipeHours, addTransportHours, D, DEPARTMENT_COUNT, departments, sizeClassIndex, sizeClassOf, sumHours, totalHours } from "./labour";
-import { DEFAULT_RATES } from "./rates";
 
 const norms = DEFAULT_RATES.norms;
 const hours = () => new Float64Array(DEPARTMENT_COUNT);

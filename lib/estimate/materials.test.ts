@@ -1,7 +1,7 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { alloyDensityGCm3, containsLead, ELEMENT_DENSITY_G_CM3, isWood, sheetAreaMm2, sheetMassKg, woodBoardVolumeM3 } from "./materials";
-import { DEFAULT_RATES } from "./rates";
 
 const within = (actual: number, expected: number, fraction: number) => Math.abs(actual - expected) <= expected * fraction;
 

@@ -1,8 +1,9 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import Decimal from "decimal.js";
 import { diffAmount, priceCentres, sumAmounts, type CostCentre } from "./money";
-import { DEFAULT_RATES, type Rates } from "./rates";
+import { type Rates } from "./rates";
 import { departments, type Department } from "./labour";
 
 const zeroHours = () => Object.fromEntries(departments.map((d) => [d, 0])) as Record<Department, number>;

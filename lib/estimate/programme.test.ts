@@ -1,6 +1,6 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import { ceilWeeks, departmentWeeks, planProgramme } from "./programme";
-import { DEFAULT_RATES } from "./rates";
 import { departments, type Department } from "./labour";
 
 const P = { ...DEFAULT_RATES.programme, hoursPerWeek: 40, efficiency: 0.8, crew: { ...DEFAULT_RATES.programme.crew, metalPipes: 2, voicing: 1, erection: 4 } };

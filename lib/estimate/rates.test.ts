@@ -1,5 +1,6 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
-import { DEFAULT_RATES, parseRates, ratesSchema } from "./rates";
+import { parseRates, ratesSchema } from "./rates";
 import { departments, sizeClasses } from "./labour";
 
 describe("rates and norms", () => {
@@ -24,7 +25,7 @@ describe("rates and norms", () => {
   });
 
   it("fills what a firm leaves out from the defaults", () => {
-    const r = parseRates({ norms: { erectPerPipe: 0.2 }, alloys: { spotted: { tin: 0.45, lead: 0.55 } } });
+    const r = parseRates({ norms: { erectPerPipe: 0.2 }, alloys: { spotted: { tin: 0.45, lead: 0.55 } } }, DEFAULT_RATES);
     expect(r.ok).toBe(true);
     if (r.ok) {
       expect(r.rates.norms.erectPerPipe).toBe(0.2);
@@ -35,7 +36,7 @@ describe("rates and norms", () => {
   });
 
   it("names the field of a bad value", () => {
-    const r = parseRates({ hourlyRate: { voicing: "seventy" }, programme: { efficiency: 1.5 }, alloys: { zinc: { zinc: 0.5 } } });
+    const r = parseRates({ hourlyRate: { voicing: "seventy" }, programme: { efficiency: 1.5 }, alloys: { zinc: { zinc: 0.5 } } }, DEFAULT_RATES);
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.messages.some((m) => m.startsWith("Rates: hourlyRate.voicing:"))).toBe(true);
@@ -45,6 +46,6 @@ describe("rates and norms", () => {
   });
 
   it("refuses rates that are not an object", () => {
-    expect(parseRates([1, 2]).ok).toBe(false);
+    expect(parseRates([1, 2], DEFAULT_RATES).ok).toBe(false);
   });
 });

@@ -126,89 +126,6 @@ export type Norms = Rates["norms"];
 export type RatesInput = DeepPartial<z.input<typeof ratesSchema>>;
 type DeepPartial<T> = T extends object ? { [K in keyof T]?: DeepPartial<T[K]> } : T;
 
-/** Complete default rates and norms. Invented demo values, every one of them. */
-export const DEFAULT_RATES: Rates = {
-  provenance: "invented demo values — replace with the firm's own rates and norms",
-  currency: "EUR",
-  hourlyRate: {
-    metalPipes: "58.00", woodPipes: "56.00", reeds: "64.00", voicing: "72.00", chestAction: "56.00",
-    console: "60.00", electrics: "62.00", dismantling: "50.00", transport: "45.00", erection: "55.00",
-    tonalFinishing: "78.00",
-  },
-  metalPricePerKg: { "high-tin": "38.00", spotted: "24.00", common: "14.00", zinc: "9.50", copper: "16.00" },
-  woodPricePerM3: { pine: "950.00", oak: "2400.00", mahogany: "3800.00" },
-  cablePricePerM: "0.35",
-  overheadPercent: "18",
-  contingencyPercent: "7.5",
-  marginPercent: "12",
-  taxPercent: "20",
-  alloys: {
-    "high-tin": { tin: 0.75, lead: 0.25 },
-    spotted: { tin: 0.5, lead: 0.5 },
-    common: { tin: 0.3, lead: 0.68, antimony: 0.02 },
-    zinc: { zinc: 1 },
-    copper: { copper: 1 },
-  },
-  woodDensityKgM3: { pine: 450, oak: 750, mahogany: 600 },
-  sheetThicknessMm: { over8: 2.2, "4to8": 1.6, "2to4": 1.1, "1to2": 0.8, under1: 0.6 },
-  boardThicknessMm: { over8: 32, "4to8": 24, "2to4": 18, "1to2": 13, under1: 9 },
-  footLengthMm: { over8: 450, "4to8": 350, "2to4": 260, "1to2": 200, under1: 160 },
-  cutUpFraction: 0.3,
-  chest: { clearanceMinMm: 8, clearanceFractionOfDiameter: 0.15, endBoardMm: 60, passageBoardMm: 400 },
-  wiring: { relayToChestM: 3, offsetChestRunM: 3, consoleInternalM: 2, conductorsPerStopControl: 2 },
-  norms: {
-    newMetalPipe: { over8: 9, "4to8": 4.5, "2to4": 1.6, "1to2": 0.8, under1: 0.45 },
-    newWoodPipe: { over8: 14, "4to8": 7, "2to4": 3.2, "1to2": 1.8, under1: 1.2 },
-    reedResonator: { over8: 8, "4to8": 4, "2to4": 1.8, "1to2": 1, under1: 0.6 },
-    reedParts: { over8: 3.5, "4to8": 2.5, "2to4": 1.8, "1to2": 1.4, under1: 1.2 },
-    restoreMetalPipe: { over8: 3, "4to8": 1.6, "2to4": 0.7, "1to2": 0.4, under1: 0.25 },
-    restoreWoodPipe: { over8: 5, "4to8": 2.5, "2to4": 1.2, "1to2": 0.7, under1: 0.5 },
-    restoreReedParts: { over8: 1.5, "4to8": 1.2, "2to4": 0.9, "1to2": 0.7, under1: 0.6 },
-    cleanRetainedPipe: 0.12,
-    relocatePipe: 0.2,
-    voiceNewFluePipe: 0.5,
-    voiceNewReedPipe: 0.9,
-    revoicePipe: 0.35,
-    regulateRestoredPipe: 0.15,
-    chestPerNoteChannel: 1.2,
-    chestPerStop: 10,
-    chestPerPipeMagnet: 0.3,
-    offsetChestPerPipe: 1.5,
-    windingPerDivision: 60,
-    swellBoxPerDivision: 140,
-    chestRestoredFactor: 0.45,
-    chestRetainedFactor: 0.1,
-    consolePerKeyboard: 45,
-    consolePerStopControl: 2.5,
-    consolePerCoupler: 4,
-    consolePerTremulant: 3,
-    consolePerPiston: 1.5,
-    combinationSystem: 40,
-    consoleRestoredFactor: 0.5,
-    consoleRetainedFactor: 0.1,
-    electricsPerConductor: 0.04,
-    electricsPerStop: 1.5,
-    electricsPerDivision: 16,
-    dismantlePerDivision: 24,
-    dismantlePerPipe: 0.06,
-    transportPerTrip: 24,
-    transportPerThousandPipes: 10,
-    erectPerDivision: 60,
-    erectPerPipe: 0.1,
-    finishPerNewStop: 8,
-    finishPerExistingStop: 4,
-    finishPerDerivedStop: 1.5,
-    finishPerPipe: 0.03,
-  },
-  programme: {
-    hoursPerWeek: 38,
-    efficiency: 0.85,
-    crew: {
-      metalPipes: 2, woodPipes: 1, reeds: 1, voicing: 2, chestAction: 2, console: 1, electrics: 1,
-      dismantling: 3, transport: 2, erection: 4, tonalFinishing: 2,
-    },
-  },
-};
 
 function isPlainObject(v: unknown): v is Record<string, unknown> {
   return typeof v === "object" && v !== null && !Array.isArray(v);
@@ -225,15 +142,36 @@ function mergeDeep(base: unknown, over: unknown): unknown {
 export type RatesResult = { ok: true; rates: Rates } | { ok: false; messages: string[] };
 
 /**
- * Validates a firm's rates and norms. Any value left out is taken from DEFAULT_RATES, so a file may
- * carry only what differs; alloy compositions replace the default composition as a whole.
+ * Validates a firm's rates and norms. Any value left out is taken from `base` (e.g. the firm's
+ * stored rates, or DEFAULT_RATES from demo-rates.ts), so a file may carry only what differs; alloy
+ * compositions replace the base composition as a whole.
  */
-export function parseRates(input: unknown): RatesResult {
+export function parseRates(input: unknown, base: Rates): RatesResult {
   if (input !== undefined && !isPlainObject(input)) return { ok: false, messages: ["Rates: expected an object"] };
   const merged = isPlainObject(input) && isPlainObject(input.alloys)
-    ? mergeDeep({ ...DEFAULT_RATES, alloys: { ...DEFAULT_RATES.alloys, ...input.alloys } }, { ...input, alloys: undefined })
-    : mergeDeep(DEFAULT_RATES, input);
+    ? mergeDeep({ ...base, alloys: { ...base.alloys, ...input.alloys } }, { ...input, alloys: undefined })
+    : mergeDeep(base, input);
   const r = ratesSchema.safeParse(merged);
   if (r.success) return { ok: true, rates: r.data };
   return { ok: false, messages: r.error.issues.map((i) => `Rates: ${i.path.join(".") || "(top)"}: ${i.message}`) };
+}
+
+/**
+ * The rates a role without money:read may hold: the labour norms, crews and chest and wiring rules
+ * (what the workshop needs for hours and space), with every price, rate and percentage set to zero.
+ */
+export function withoutPrices(rates: Rates): Rates {
+  const zero = <K extends string>(r: Readonly<Record<K, string>>) => Object.fromEntries(Object.keys(r).map((k) => [k, "0.00"])) as Record<K, string>;
+  return {
+    ...rates,
+    provenance: "prices withheld",
+    hourlyRate: zero(rates.hourlyRate),
+    metalPricePerKg: zero(rates.metalPricePerKg),
+    woodPricePerM3: zero(rates.woodPricePerM3),
+    cablePricePerM: "0.00",
+    overheadPercent: "0",
+    contingencyPercent: "0",
+    marginPercent: "0",
+    taxPercent: "0",
+  };
 }

@@ -52,7 +52,7 @@ export const stopSchema = z.object({
   footage: footageSchema,
   ranks: z.number().int().min(1).max(12).default(1),
   /** Mixtures and cornets: each break's footages, one per rank; the first break starts at the rank's lowest note. */
-  breaks: z.array(mixtureBreakSchema).optional(),
+  breaks: z.array(mixtureBreakSchema).max(24).optional(),
   family: z.enum(families),
   construction: z.enum(constructions).default("open"),
   material: z.enum(materials).default("spotted"),
@@ -86,7 +86,8 @@ export const divisionSchema = z.object({
   passageBoard: z.boolean().default(true),
   /** What happens to the windchests and action: made new, restored, or kept as they are. */
   chestWork: z.enum(["new", "restored", "retained"]).default("new"),
-  stops: z.array(stopSchema).default([]),
+  // Limits far above any organ, so a runaway file cannot tie up the server.
+  stops: z.array(stopSchema).max(250).default([]),
 });
 
 export const couplerSchema = z.object({
@@ -126,7 +127,7 @@ export const tuningSchema = z.object({
 export const schemeSchema = z.object({
   name: z.string().min(1).max(120),
   tuning: tuningSchema.default({ pitchHz: 440, temperatureC: 18, mutations: "tempered" }),
-  divisions: z.array(divisionSchema).min(1),
+  divisions: z.array(divisionSchema).min(1).max(16),
   accessories: accessoriesSchema.default({
     consoleWork: "new",
     couplers: [],

@@ -1,7 +1,7 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { parseScheme, parseSchemeFile } from "./validate";
-import { DEFAULT_RATES } from "./rates";
 
 type RawStop = Record<string, unknown>;
 type RawDivision = { id: string; name: string; keyboard: string; compass: { low: string; high: string }; stops: RawStop[] };
@@ -130,12 +130,12 @@ describe("parseScheme", () => {
 
 describe("parseSchemeFile", () => {
   it("takes the defaults when a file carries no rates", () => {
-    const r = parseSchemeFile(JSON.stringify(base()));
+    const r = parseSchemeFile(JSON.stringify(base()), DEFAULT_RATES);
     expect(r.ok && r.rates).toBe(DEFAULT_RATES);
   });
 
   it("merges the rates a file carries over the defaults", () => {
-    const r = parseSchemeFile({ ...base(), rates: { currency: "GBP", hourlyRate: { voicing: "80.00" } } });
+    const r = parseSchemeFile({ ...base(), rates: { currency: "GBP", hourlyRate: { voicing: "80.00" } } }, DEFAULT_RATES);
     expect(r.ok).toBe(true);
     if (r.ok) {
       expect(r.rates.currency).toBe("GBP");
@@ -147,7 +147,7 @@ describe("parseSchemeFile", () => {
   it("reports bad rates alongside bad scheme messages", () => {
     const s = base();
     s.divisions[0].compass = { low: "c''''", high: "C" };
-    const r = parseSchemeFile({ ...s, rates: { taxPercent: 20 } });
+    const r = parseSchemeFile({ ...s, rates: { taxPercent: 20 } }, DEFAULT_RATES);
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.messages.some((m) => m.startsWith('Division "Great"'))).toBe(true);

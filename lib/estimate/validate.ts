@@ -7,7 +7,7 @@
 import { schemeSchema, type Scheme } from "./scheme";
 import { planScheme, where } from "./pipes";
 import { MSG_NOT_FOOTAGE } from "./pitch";
-import { DEFAULT_RATES, parseRates, type Rates } from "./rates";
+import { parseRates, type Rates } from "./rates";
 
 export type ParseResult = { ok: true; scheme: Scheme } | { ok: false; messages: string[] };
 export type ParseFileResult = { ok: true; scheme: Scheme; rates: Rates } | { ok: false; messages: string[] };
@@ -71,16 +71,16 @@ export function parseScheme(input: unknown): ParseResult {
 
 /**
  * Validates a scheme file: the scheme's fields, plus an optional "rates" object holding any of the
- * firm's rates and norms (the rest from DEFAULT_RATES, invented demo values).
+ * firm's rates and norms (the rest from `base`).
  */
-export function parseSchemeFile(input: unknown): ParseFileResult {
+export function parseSchemeFile(input: unknown, base: Rates): ParseFileResult {
   const j = fromJson(input);
   if ("error" in j) return { ok: false, messages: [j.error] };
   const obj = j.value;
   if (typeof obj !== "object" || obj === null || Array.isArray(obj)) return { ok: false, messages: ["Scheme: expected a JSON object"] };
   const { rates: rawRates, ...rest } = obj as Record<string, unknown>;
   const s = parseScheme(rest);
-  const r = rawRates === undefined ? ({ ok: true, rates: DEFAULT_RATES } as const) : parseRates(rawRates);
+  const r = rawRates === undefined ? ({ ok: true, rates: base } as const) : parseRates(rawRates, base);
   if (s.ok && r.ok) return { ok: true, scheme: s.scheme, rates: r.rates };
   return { ok: false, messages: [...(s.ok ? [] : s.messages), ...(r.ok ? [] : r.messages)] };
 }

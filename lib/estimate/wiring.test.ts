@@ -1,6 +1,6 @@
+import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import { consoleWiring, divisionWiring, isElectricAction } from "./wiring";
-import { DEFAULT_RATES } from "./rates";
 import { estimateScheme } from "./estimate";
 import { manual, pedal, scheme, stop } from "./test-support/schemes";
 import type { Scheme } from "./scheme";
@@ -61,7 +61,7 @@ describe("a large four-manual electric-action organ", () => {
 
   it("is wired with between 8 and 30 km of conductor", () => {
     const s = fourManual();
-    const e = estimateScheme(s);
+    const e = estimateScheme(s, DEFAULT_RATES);
     expect(s.divisions.filter((d) => d.keyboard === "manual").length).toBe(4);
     expect(e.totals.stops).toBe(77);
     expect(e.totals.pipes.total).toBeGreaterThan(4500);
@@ -72,6 +72,6 @@ describe("a large four-manual electric-action organ", () => {
   it("needs far less with mechanical action", () => {
     const s = fourManual();
     const mech = { ...s, divisions: s.divisions.map((d) => (d.keyboard === "manual" ? { ...d, action: "mechanical" as const, chest: "slider" as const } : d)) };
-    expect(estimateScheme(mech).totals.wiring.conductorLengthKm).toBeLessThan(estimateScheme(s).totals.wiring.conductorLengthKm / 3);
+    expect(estimateScheme(mech, DEFAULT_RATES).totals.wiring.conductorLengthKm).toBeLessThan(estimateScheme(s, DEFAULT_RATES).totals.wiring.conductorLengthKm / 3);
   });
 });

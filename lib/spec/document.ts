@@ -12,7 +12,7 @@ export type SchemeStatus = (typeof schemeStatuses)[number];
 export const schemeDocumentSchema = z.object({
   name: z.string().trim().min(1, "Give the scheme a name.").max(120),
   description: z.string().max(4000).default(""),
-  divisions: z.array(divisionSchema).default([]),
+  divisions: z.array(divisionSchema).max(16, "At most 16 divisions.").default([]),
   accessories: accessoriesSchema.prefault({}),
 });
 export type SchemeDocumentInput = z.input<typeof schemeDocumentSchema>;

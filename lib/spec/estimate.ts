@@ -2,12 +2,12 @@
  * The estimate of a saved scheme document under its project's tuning: the one call the server and
  * the editor's live figures share. Pure.
  */
-import { DEFAULT_RATES, estimateScheme, parseScheme, type Estimate, type Rates, type Scheme } from "@/lib/estimate";
+import { estimateScheme, parseScheme, type Estimate, type Rates, type Scheme } from "@/lib/estimate";
 import { toEstimatorScheme, type SchemeDocument, type Tuning } from "./document";
 
 export type DocumentEstimate = { ok: true; estimate: Estimate; scheme: Scheme } | { ok: false; messages: readonly string[] };
 
-export function estimateDocument(doc: SchemeDocument, tuning: Tuning, rates: Rates = DEFAULT_RATES): DocumentEstimate {
+export function estimateDocument(doc: SchemeDocument, tuning: Tuning, rates: Rates): DocumentEstimate {
   if (!doc.divisions.length) return { ok: false, messages: ["Add a division to see the figures."] };
   // parseScheme runs the same consistency checks estimateScheme needs, so this never throws.
   const parsed = parseScheme(toEstimatorScheme(doc, tuning));

@@ -328,9 +328,12 @@ test.describe("read-only roles", () => {
     await schemes.getByRole("link", { name: "Shared scheme" }).click();
     await expect(page).toHaveURL(new RegExp(`${schemePath(projectId, schemeId)}$`));
     await expectNoEditing(page);
-    await expect(page.getByTestId("figures")).toHaveAttribute("data-state", "ok");
+    // The committee sees the stops and their pipes, not the firm's working figures, money or history.
+    await expect(stopCard(page, "Open Diapason")).toContainText("61 pipes");
+    await expect(page.getByTestId("figures")).toHaveCount(0);
     await expect(page.getByTestId("fig-money")).toHaveCount(0);
-    await expect(page.getByTestId("figures")).not.toContainText(/Money|Total with tax|Labour|£|€|\$|\b(EUR|GBP|USD|CHF)\b/);
+    await expect(page.locator("main")).not.toContainText(/Total with tax|Labour|£|€|\$|\b(EUR|GBP|USD|CHF)\b/);
+    await expect(page.getByRole("button", { name: "Revisions" })).toHaveCount(0);
 
     await page.goto(schemePath(projectId, hiddenId));
     await expect(page.getByRole("heading", { name: "This page could not be found." })).toBeVisible();

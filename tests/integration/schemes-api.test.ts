@@ -105,6 +105,39 @@ describe("schemes API", () => {
     expect(shared.json.scheme.sharedWithClient).toBe(true);
     expect((await api(`/api/schemes/${scheme.id}`, { cookie: clientCookie })).status).toBe(200);
     expect((await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie: clientCookie, body: { version: 1, document: scheme.document } })).status).toBe(403);
+    // The firm's working history stays with the firm.
+    expect((await api(`/api/schemes/${scheme.id}/revisions`, { cookie: clientCookie })).status).toBe(403);
+    expect((await api(`/api/schemes/${scheme.id}/revisions/1`, { cookie: clientCookie })).status).toBe(403);
+  });
+
+  it("tells a client neither which scheme a shared one was copied from nor other members' e-mails", async () => {
+    const { scheme, cookie, project, designer } = await setUp();
+    const copy = (await api(`/api/schemes/${scheme.id}/duplicate`, { method: "POST", cookie, body: { name: "Shared copy" } })).json.scheme;
+    await api(`/api/schemes/${copy.id}`, { method: "PATCH", cookie, body: { sharedWithClient: true } });
+    const client = await makeUser("client");
+    await api(`/api/projects/${project.id}/members`, { method: "POST", cookie, body: { email: client.email } });
+    const clientCookie = await signIn(client);
+    expect((await api(`/api/schemes/${copy.id}`, { cookie })).json.scheme.copiedFromId).toBe(scheme.id);
+    expect((await api(`/api/schemes/${copy.id}`, { cookie: clientCookie })).json.scheme.copiedFromId).toBeNull();
+    const seen = (await api(`/api/projects/${project.id}`, { cookie: clientCookie })).json;
+    expect(seen.schemes.map((s: { copiedFromId: string | null }) => s.copiedFromId)).toEqual([null]);
+    const emails = Object.fromEntries(seen.project.members.map((m: { id: string; email: string }) => [m.id, m.email]));
+    expect(emails).toEqual({ [designer.id]: "", [client.id]: client.email });
+  });
+
+  it("refuses changes to the schemes of an archived project with 409, and saves nothing", async () => {
+    const { scheme, cookie, project } = await setUp();
+    await api(`/api/projects/${project.id}/archive`, { method: "POST", cookie, body: { archived: true } });
+    const save = await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: { ...scheme.document, name: "Changed" } } });
+    expect(save.status).toBe(409);
+    expect(save.json.error.message).toMatch(/archived/);
+    expect((await api(`/api/schemes/${scheme.id}/duplicate`, { method: "POST", cookie, body: { name: "Copy" } })).status).toBe(409);
+    expect((await api(`/api/projects/${project.id}/schemes`, { method: "POST", cookie, body: { name: "New" } })).status).toBe(409);
+    expect(await revisionCount(scheme.id)).toBe(1);
+    expect((await api(`/api/projects/${project.id}`, { cookie })).json.schemes).toHaveLength(1);
+    // Brought back, it can be changed again.
+    await api(`/api/projects/${project.id}/archive`, { method: "POST", cookie, body: { archived: false } });
+    expect((await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: scheme.document } })).status).toBe(200);
   });
 
   it("keeps every revision and restores an earlier one as a new version", async () => {

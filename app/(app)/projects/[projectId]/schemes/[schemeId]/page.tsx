@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { SchemeEditor } from "@/components/spec/scheme-editor";
 import { can } from "@/lib/roles";
 import { requirePageUser } from "@/lib/server/guard";
+import { ratesForUser } from "@/lib/server/rates";
 import { loadSchemePage } from "./load";
 
 export const metadata: Metadata = { title: "Scheme" };
@@ -18,6 +19,9 @@ export default async function SchemePage({ params }: { params: Promise<{ project
       projectName={project.name}
       editable={can(user.role, "schemes:edit")}
       showMoney={can(user.role, "money:read")}
+      showFigures={can(user.role, "estimate:read")}
+      canSeeRevisions={can(user.role, "revisions:read")}
+      rates={ratesForUser(user)}
     />
   );
 }

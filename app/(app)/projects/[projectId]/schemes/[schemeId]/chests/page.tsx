@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageUser } from "@/lib/server/guard";
+import { ratesForUser } from "@/lib/server/rates";
 import { loadSchemePage } from "../load";
 import { ChestsClient } from "./chests-client";
 
@@ -16,7 +17,7 @@ export default async function ChestsPage({ params }: { params: Promise<{ project
         <Link href={`/projects/${projectId}/schemes/${schemeId}`} className="btn">← Back to the editor</Link>
         <h1 className="text-2xl font-semibold">Chests of {scheme.document.name}</h1>
       </div>
-      <ChestsClient document={scheme.document} tuning={scheme.tuning} />
+      <ChestsClient document={scheme.document} tuning={scheme.tuning} rates={ratesForUser(user)} />
     </div>
   );
 }
