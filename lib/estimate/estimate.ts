@@ -12,7 +12,7 @@ import { MIN_LENGTH_FRACTION, speedOfSoundMPerS } from "./acoustics";
 import { NORMAL_SCALE_8FT_C_MM, SQUARE_SIDE_PER_DIAMETER } from "./scale";
 import { alloyDensityGCm3, containsLead, isWood, metals, woods, type Metal, type Wood } from "./materials";
 import {
-  addConsoleHours, addDivisionHours, addPipeHours, addTransportHours, bySizeArray, DEPARTMENT_COUNT, hoursRecord,
+  addConsoleHours, addDivisionHours, addPipeHours, addTransportHours, bySizeArray, DEPARTMENT_COUNT, hoursRecord, nominalLengthMm, sizeClassIndex,
   sumHours, totalHours, type Department,
 } from "./labour";
 import { chestFit, chestSize, type ChestFit, type ChestRow, type ChestSize } from "./chest";
@@ -21,7 +21,7 @@ import { priceCentres, type CostCentre, type MaterialLine, type Money } from "./
 import { planProgramme, type Programme } from "./programme";
 import { cautionsFor, type Caution } from "./cautions";
 import { midiToNote } from "./notes";
-import { mmWaterToPa, windPressureMm, ftToMm } from "./units";
+import { mmWaterToPa, windPressureMm } from "./units";
 
 export interface StopEstimate {
   readonly id: string;
@@ -126,10 +126,6 @@ const SEMITONE = Math.pow(2, 1 / 12);
 const MIN_LF = MIN_LENGTH_FRACTION;
 const SQ_SIDE = SQUARE_SIDE_PER_DIAMETER;
 const D_8FT_C = NORMAL_SCALE_8FT_C_MM;
-const FT8_MM = ftToMm(8);
-const FT4_MM = ftToMm(4);
-const FT2_MM = ftToMm(2);
-const FT1_MM = ftToMm(1);
 const PI = Math.PI;
 
 const r1 = (x: number) => Math.round(x * 10) / 10;
@@ -204,6 +200,9 @@ export function estimateScheme(scheme: Scheme, rates: Rates, plan: SchemePlan = 
     const base = st * 5;
     const row = seg.row;
     const offN = seg.offsetCount;
+    // The trade's size class goes by the pipe's nominal length (8′ C open = 8 ft; stopped half that),
+    // not the corrected speaking length, so a pipe keeps its class whatever the pitch or temperature.
+    let tradeLen = nominalLengthMm(s0, g.divisor);
     let chan = seg.fromKey + seg.channelOffset;
     let mv = 0;
     let wv = 0;
@@ -214,7 +213,7 @@ export function estimateScheme(scheme: Scheme, rates: Rates, plan: SchemePlan = 
       const nominal = cOverDiv / f;
       let len = nominal - k * d;
       if (len < nominal * MIN_LF) len = nominal * MIN_LF;
-      const cls = len > FT8_MM ? 0 : len > FT4_MM ? 1 : len > FT2_MM ? 2 : len > FT1_MM ? 3 : 4;
+      const cls = sizeClassIndex(tradeLen);
       let foot: number;
       if (wood) {
         const t = board[cls];
@@ -238,6 +237,7 @@ export function estimateScheme(scheme: Scheme, rates: Rates, plan: SchemePlan = 
       if (len > ml) ml = len;
       if (d > md) md = d;
       f *= SEMITONE;
+      tradeLen /= SEMITONE;
       d *= ratio;
     }
     metalVol[st] += mv;

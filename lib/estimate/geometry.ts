@@ -12,7 +12,7 @@ import { bodyAreaFactor, isWood } from "./materials";
 import { formatFootage, frequencyHz } from "./pitch";
 import { midiToNote } from "./notes";
 import { planScheme, type SchemePlan } from "./pipes";
-import { sizeClassOf, type SizeClass } from "./labour";
+import { nominalLengthMm, sizeClassOf, type SizeClass } from "./labour";
 
 export interface RankGeometry {
   readonly resonator: Resonator;
@@ -127,7 +127,7 @@ export function pipesOfStop(scheme: Scheme, stopId: string, rates: Rates, plan: 
         diameterMm: round(d, 2),
         sideMm: g.wood ? round(d * SQUARE_SIDE_PER_DIAMETER, 2) : null,
         mouthWidthMm: g.reed ? null : round(mouthWidthMm(d, g.mouthWidthFraction), 2),
-        sizeClass: sizeClassOf(lengthMm),
+        sizeClass: sizeClassOf(nominalLengthMm(sounding - 36, g.divisor)),
         state,
         onOffsetChest: mine ? mine.offset : false,
       });

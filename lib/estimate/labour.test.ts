@@ -1,12 +1,14 @@
 import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
-import { addConsoleHours, addDivisionHours, addPipeHours, addTransportHours, D, DEPARTMENT_COUNT, departments, sizeClassIndex, sizeClassOf, sumHours, totalHours } from "./labour";
+import { estimateScheme } from "./estimate";
+import { addConsoleHours, addDivisionHours, addPipeHours, addTransportHours, D, DEPARTMENT_COUNT, departments, nominalLengthMm, sizeClassIndex, sizeClassOf, sumHours, totalHours } from "./labour";
+import { schemeSchema } from "./scheme";
 
 const norms = DEFAULT_RATES.norms;
 const hours = () => new Float64Array(DEPARTMENT_COUNT);
 
 describe("size classes", () => {
-  it("classes pipes by speaking length at 8, 4, 2 and 1 ft (1 ft = 304.8 mm, NIST SP 811)", () => {
+  it("classes pipes by nominal length at 8, 4, 2 and 1 ft (1 ft = 304.8 mm, NIST SP 811)", () => {
     expect(sizeClassOf(2438.5)).toBe("over8");
     expect(sizeClassOf(2438.4)).toBe("4to8");
     expect(sizeClassOf(1219.3)).toBe("4to8");
@@ -121,5 +123,38 @@ describe("division, console and transport work", () => {
     const s = sumHours([r, r, r]);
     expect(s.metalPipes).toBe(0.3);
     expect(totalHours(s)).toBe(3.3);
+  });
+});
+
+describe("nominal length", () => {
+  it("reckons an open 8′ C as 8 ft and a stopped one as 4 ft (common practice, no source)", () => {
+    expect(nominalLengthMm(0, 2)).toBeCloseTo(2438.4, 9);
+    expect(sizeClassOf(nominalLengthMm(0, 2))).toBe("4to8");
+    expect(sizeClassOf(nominalLengthMm(-12, 2))).toBe("over8"); // 16′ C
+    expect(sizeClassOf(nominalLengthMm(0, 4))).toBe("2to4"); // stopped 8′ C, a 4 ft pipe
+    expect(sizeClassOf(nominalLengthMm(12, 2))).toBe("2to4"); // 4′ C
+  });
+
+  it("keeps every pipe in its class when only the pitch standard changes", () => {
+    const great = (pitchHz: number) =>
+      estimateScheme(
+        schemeSchema.parse({
+          name: "Pitch test (invented)",
+          tuning: { pitchHz },
+          divisions: [
+            {
+              id: "gt", name: "Great", keyboard: "manual", compass: { low: "C", high: "c''''" },
+              stops: [
+                { id: "a", name: "Open Diapason", footage: "8", family: "principal" },
+                { id: "b", name: "Principal", footage: "4", family: "principal" },
+                { id: "c", name: "Fifteenth", footage: "2", family: "principal" },
+              ],
+            },
+          ],
+        }),
+        DEFAULT_RATES,
+      ).divisions[0].hours.metalPipes;
+    expect(great(415)).toBe(great(440));
+    expect(great(466)).toBe(great(440));
   });
 });

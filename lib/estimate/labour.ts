@@ -41,9 +41,28 @@ const FT4_MM = 4 * M_PER_FT * 1000;
 const FT2_MM = 2 * M_PER_FT * 1000;
 const FT1_MM = M_PER_FT * 1000;
 
-/** Size class index (0 = over 8′ … 4 = under 1′) of a speaking length in mm; boundaries belong to the shorter class. */
+// A hair above each footage, so a C that reaches a boundary by repeated stepping stays in the shorter class.
+const B8 = FT8_MM * (1 + 1e-9);
+const B4 = FT4_MM * (1 + 1e-9);
+const B2 = FT2_MM * (1 + 1e-9);
+const B1 = FT1_MM * (1 + 1e-9);
+
+/**
+ * Size class index (0 = over 8′ … 4 = under 1′) of a pipe's nominal length in mm (nominalLengthMm);
+ * boundaries belong to the shorter class, so an 8′ C is a 4–8′ pipe.
+ */
 export function sizeClassIndex(lengthMm: number): number {
-  return lengthMm > FT8_MM ? 0 : lengthMm > FT4_MM ? 1 : lengthMm > FT2_MM ? 2 : lengthMm > FT1_MM ? 3 : 4;
+  return lengthMm > B8 ? 0 : lengthMm > B4 ? 1 : lengthMm > B2 ? 2 : lengthMm > B1 ? 3 : 4;
+}
+
+/**
+ * A pipe's nominal length as the trade reckons size (8 ft at 8′ C for an open pipe or full-length
+ * resonator, half that when stopped or half-length), from its pitch in semitones above 8′ C.
+ * Independent of pitch standard and temperature, unlike the speaking length, so norms priced
+ * "per pipe of 4–8 ft" do not jump when the pitch or the design temperature changes.
+ */
+export function nominalLengthMm(semitonesAbove8ftC: number, divisor: number): number {
+  return ((2 * FT8_MM) / divisor) * Math.pow(2, -semitonesAbove8ftC / 12);
 }
 
 export function sizeClassOf(lengthMm: number): SizeClass {
