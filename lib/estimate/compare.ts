@@ -9,7 +9,6 @@ import { estimateScheme, type Estimate } from "./estimate";
 import { departments, type Department } from "./labour";
 import { metals, woods, type Metal, type Wood } from "./materials";
 import { diffAmount } from "./money";
-import type { PipeCounts } from "./pipes";
 import { parseFootage } from "./pitch";
 
 export interface StopRef {
@@ -39,15 +38,8 @@ export interface Comparison {
   readonly from: string;
   readonly to: string;
   readonly stops: { readonly added: readonly StopRef[]; readonly removed: readonly StopRef[]; readonly changed: readonly StopChange[] };
-  readonly totals: {
-    readonly stops: number;
-    readonly ranks: number;
-    readonly pipes: PipeCounts;
-    readonly hours: Readonly<Record<Department, number>>;
-    readonly hoursTotal: number;
-    readonly metalKg: Readonly<Record<Metal, number>>;
-    readonly metalTotalKg: number;
-    readonly woodM3: Readonly<Record<Wood, number>>;
+  /** Second scheme minus first, for each of the estimate's totals (and the programme's weeks). */
+  readonly totals: Pick<Estimate["totals"], "stops" | "ranks" | "pipes" | "hours" | "hoursTotal" | "metalKg" | "metalTotalKg" | "woodM3"> & {
     readonly conductorLengthM: number;
     readonly weeks: number;
   };
