@@ -11,5 +11,4 @@ g.stopwrightPool = pool;
 
 export const db = drizzle(pool, { schema });
 export type Db = typeof db;
-export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 export { pool };

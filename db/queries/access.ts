@@ -1,6 +1,7 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
-import { db, type Tx } from "@/db/client";
+import { db } from "@/db/client";
+import type { Store } from "@/db/scheme-store";
 import { projectMembers, projects, schemes, type Project, type Scheme } from "@/db/schema";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
@@ -10,7 +11,7 @@ import type { SessionUser } from "@/lib/server/guard";
  * they are a member of, and in them only the schemes shared with the committee. Anything else
  * answers 404, so a client cannot learn that a project exists.
  */
-export async function loadProjectFor({ user, projectId, tx = db }: { user: SessionUser; projectId: string; tx?: Tx | typeof db }): Promise<Project> {
+export async function loadProjectFor({ user, projectId, tx = db }: { user: SessionUser; projectId: string; tx?: Store }): Promise<Project> {
   if (!isUuid(projectId)) throw new AppError("not_found", "No such project.");
   const [project] = await tx.select().from(projects).where(eq(projects.id, projectId)).limit(1);
   if (!project) throw new AppError("not_found", "No such project.");
@@ -25,7 +26,7 @@ export async function loadProjectFor({ user, projectId, tx = db }: { user: Sessi
   return project;
 }
 
-export async function loadSchemeFor({ user, schemeId, tx = db, lock = false }: { user: SessionUser; schemeId: string; tx?: Tx | typeof db; lock?: boolean }): Promise<{ scheme: Scheme; project: Project }> {
+export async function loadSchemeFor({ user, schemeId, tx = db, lock = false }: { user: SessionUser; schemeId: string; tx?: Store; lock?: boolean }): Promise<{ scheme: Scheme; project: Project }> {
   if (!isUuid(schemeId)) throw new AppError("not_found", "No such scheme.");
   const query = tx.select().from(schemes).where(eq(schemes.id, schemeId)).limit(1);
   const [scheme] = lock ? await query.for("update") : await query;

@@ -1,6 +1,6 @@
 import "server-only";
 import { notFound } from "next/navigation";
-import { getProjectForUser } from "@/db/queries/projects";
+import { loadProjectFor } from "@/db/queries/access";
 import { getSchemeForUser } from "@/db/queries/schemes";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
@@ -10,7 +10,8 @@ export async function loadSchemePage(user: SessionUser, projectId: string, schem
   try {
     const scheme = await getSchemeForUser({ user, schemeId });
     if (scheme.projectId !== projectId) notFound();
-    const { project } = await getProjectForUser({ user, projectId });
+    // The project row only: the page needs its name and venue, not its scheme list and members.
+    const project = await loadProjectFor({ user, projectId });
     return { scheme, project };
   } catch (err) {
     if (err instanceof AppError && (err.code === "not_found" || err.code === "forbidden")) notFound();
