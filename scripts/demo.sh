@@ -10,7 +10,8 @@ ensure_node_modules
 
 bash scripts/db.sh start
 export DATABASE_URL=$(bash scripts/db.sh url)
-export NEXTAUTH_URL=http://127.0.0.1:3000
+port=${DEMO_PORT:-3000}
+export NEXTAUTH_URL=http://127.0.0.1:$port
 mkdir -p .data
 [ -f .data/demo-secret ] || node -e "console.log(require('crypto').randomBytes(32).toString('hex'))" > .data/demo-secret
 export NEXTAUTH_SECRET=$(cat .data/demo-secret)
@@ -21,9 +22,9 @@ node_modules/.bin/next build
 
 cat <<TXT
 
-Stopwright is running on http://127.0.0.1:3000  (Ctrl-C stops it; the data stays)
+Stopwright is running on http://127.0.0.1:$port  (Ctrl-C stops it; the data stays)
 Demo accounts (invented people of an invented firm):
 $(node_modules/.bin/tsx scripts/print-demo-accounts.ts)
 
 TXT
-exec node_modules/.bin/next start -H 127.0.0.1 -p 3000
+exec node_modules/.bin/next start -H 127.0.0.1 -p "$port"
