@@ -15,7 +15,7 @@ echo "── editor"
 export PG_TEST_PORT=${BENCH_PG_PORT:-54349} PG_TEST_NAME=pg-bench
 port=${BENCH_APP_PORT:-3200}
 export DATABASE_URL=$(bash scripts/db.sh url --test)
-export NEXTAUTH_URL=http://127.0.0.1:$port NEXTAUTH_SECRET=stopwright-bench-secret-$(date +%s) NEXT_DIST_DIR=.next-bench
+export NEXTAUTH_URL=http://127.0.0.1:$port NEXTAUTH_SECRET=$(random_secret) NEXT_DIST_DIR=.next-bench
 export BENCH_BASE_URL=$NEXTAUTH_URL
 server_pid=""
 cleanup() {

@@ -12,9 +12,7 @@ bash scripts/db.sh start
 export DATABASE_URL=$(bash scripts/db.sh url)
 port=${DEMO_PORT:-3000}
 export NEXTAUTH_URL=http://127.0.0.1:$port
-mkdir -p .data
-[ -f .data/demo-secret ] || node -e "console.log(require('crypto').randomBytes(32).toString('hex'))" > .data/demo-secret
-export NEXTAUTH_SECRET=$(cat .data/demo-secret)
+export NEXTAUTH_SECRET=$(kept_secret .data/demo-secret)
 
 node_modules/.bin/tsx scripts/migrate.ts
 node_modules/.bin/tsx db/seed.ts

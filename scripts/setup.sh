@@ -20,3 +20,13 @@ ensure_node_modules() {
     npm ci --no-audit --no-fund --loglevel=error
   fi
 }
+
+# A secret of this checkout's own for the demo, dev server, tests or bench: random, never committed.
+#   random_secret            prints a new one
+#   kept_secret FILE         prints the one kept in FILE, making it first
+random_secret() { node -e "console.log(require('crypto').randomBytes(32).toString('hex'))"; }
+kept_secret() {
+  mkdir -p "$(dirname "$1")"
+  [ -s "$1" ] || (umask 077; random_secret > "$1")
+  cat "$1"
+}

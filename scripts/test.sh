@@ -14,7 +14,7 @@ rm -rf "$out"; mkdir -p "$out"
 port=${TEST_APP_PORT:-3100}
 export DATABASE_URL=$(bash scripts/db.sh url --test)
 export NEXTAUTH_URL=http://127.0.0.1:$port
-export NEXTAUTH_SECRET=stopwright-test-secret-$(date +%s)
+export NEXTAUTH_SECRET=$(random_secret)
 export E2E_BASE_URL=$NEXTAUTH_URL
 export NEXT_DIST_DIR=.next-test
 

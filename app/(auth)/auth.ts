@@ -3,11 +3,14 @@ import bcrypt from "bcryptjs";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { getUserByEmail } from "@/db/queries/users";
-import { env } from "@/lib/env";
+import { authSecret } from "@/lib/env";
 import { signInErrors, signInSchema } from "@/lib/validation/users";
 
 export const authOptions: NextAuthOptions = {
-  secret: env().NEXTAUTH_SECRET,
+  // Read when a request needs it, so a build needs no secret; a server without one never starts.
+  get secret() {
+    return authSecret();
+  },
   session: { strategy: "jwt", maxAge: 60 * 60 * 12 },
   pages: { signIn: "/sign-in" },
   providers: [

@@ -58,7 +58,7 @@ export function DivisionColumn({
     >
       <header className="border-b border-tin-rule px-2.5 pb-2 pt-2">
         <div className="flex items-center gap-1.5">
-          {editable && <DragHandle label={`Move division ${division.name}`} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />}
+          {editable && <DragHandle label={`Move division ${division.name}`} carry={{ type: "division", id: division.id }} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />}
           <h3 id={`div-title-${division.id}`} className="min-w-0 flex-1 truncate text-lg font-semibold">{division.name}</h3>
           {editable && (
             <button type="button" className="btn px-2 py-0.5 text-xs" onClick={onEditDivision} aria-label={`Edit division ${division.name}`}>

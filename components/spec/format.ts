@@ -141,6 +141,14 @@ export function formatDateTime(iso: string | null | undefined): string {
   return d.toLocaleString("en-GB", { day: "numeric", month: "short", year: "numeric", hour: "2-digit", minute: "2-digit" });
 }
 
+/** "14:32" today, "3 Nov, 14:32" on another day: when unsaved work was kept. */
+export function formatTimeOfDay(iso: string): string {
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  const time = d.toLocaleTimeString("en-GB", { hour: "2-digit", minute: "2-digit" });
+  return d.toDateString() === new Date().toDateString() ? time : `${d.toLocaleDateString("en-GB", { day: "numeric", month: "short" })}, ${time}`;
+}
+
 export const treatmentOrder = treatments;
 
 /** "Swell to Great", "Swell Octave", "Swell to Pedal Sub Octave": the trade's names for couplers. */

@@ -14,14 +14,16 @@ import { DivisionBoard } from "./division-board";
 import { DivisionForm } from "./division-form";
 import { addDivision, addStop, findStop, newId, removeDivision, removeStop, setAccessories, updateDivision, updateStop } from "./doc-ops";
 import { FiguresPanel } from "./figures-panel";
-import { formatDateTime, pitchText } from "./format";
+import { formatDateTime, formatTimeOfDay, pitchText } from "./format";
 import { historyReducer, initHistory } from "./history";
 import { RevisionsPanel } from "./revisions-panel";
 import { SaveStateBadge } from "./save-state";
 import { StopForm } from "./stop-form";
 import type { StopPipes } from "./stop-card";
 import { stopPipesById, useFigures } from "./use-figures";
-import { useSchemeSave } from "./use-scheme-save";
+import { clearDraft, readDraft, sameDocument, type UnsavedDraft } from "./unsaved-drafts";
+import { useLeaveGuard } from "./use-leave-guard";
+import { useSchemeSave, type SaveState } from "./use-scheme-save";
 
 type Editing =
   | { kind: "stop"; divisionId: string; stopId?: string; newId: string }
@@ -89,6 +91,34 @@ export function SchemeEditor({
   const [editing, setEditing] = useState<Editing>(null);
   const [showRevisions, setShowRevisions] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
+  const [draft, setDraft] = useState<UnsavedDraft | null>(null);
+  const leave = useLeaveGuard({ enabled: editable, hasUnsaved: () => save.state.kind !== "saved", flush: save.flush });
+
+  // Work left unsaved in this browser last time (a crash, a closed tab, no connection) is offered back.
+  useEffect(() => {
+    if (!editable) return;
+    const kept = readDraft(initialScheme.id);
+    if (!kept) return;
+    if (sameDocument(kept.document, initialScheme.document)) {
+      clearDraft(initialScheme.id);
+      return;
+    }
+    // After the first paint: the server's page has no browser storage to agree with.
+    const t = setTimeout(() => setDraft(kept), 0);
+    return () => clearTimeout(t);
+  }, [editable, initialScheme.id, initialScheme.document]);
+
+  function restoreDraft(kept: UnsavedDraft) {
+    setDraft(null);
+    // Saved against the version it was made on: if the scheme moved on, the conflict choice follows.
+    save.rebase(kept.baseVersion);
+    dispatch({ type: "replace", doc: kept.document, label: `Restored the changes from ${formatTimeOfDay(kept.savedAt)} that were not saved` });
+    setNotice(`Restored the changes from ${formatTimeOfDay(kept.savedAt)} that were not saved.`);
+  }
+  function discardDraft() {
+    clearDraft(initialScheme.id);
+    setDraft(null);
+  }
 
   const edit = useCallback((next: SchemeDocument, label: string) => {
     dispatch({ type: "edit", doc: next, label });
@@ -192,6 +222,20 @@ export function SchemeEditor({
 
       {notice && editable && state.kind !== "conflict" && (
         <p className="text-xs text-tin" aria-live="polite" data-testid="last-edit">{notice}</p>
+      )}
+
+      {draft && (
+        <div role="alert" className="flex flex-wrap items-center gap-3 rounded-md border border-caution bg-caution-light px-3 py-2 text-sm" data-testid="draft-banner">
+          <StateMark kind="caution" className="h-4 w-4 text-caution" />
+          <span className="flex-1">
+            <strong>You have changes from {formatTimeOfDay(draft.savedAt)} that were not saved — restore them?</strong>
+            {draft.baseVersion !== save.version && (
+              <> They were made on version {draft.baseVersion}; the scheme is now at version {save.version}, so you will be asked which to keep.</>
+            )}
+          </span>
+          <button type="button" className="btn-primary" onClick={() => restoreDraft(draft)}>Restore them</button>
+          <button type="button" className="btn" onClick={discardDraft}>Discard them</button>
+        </div>
       )}
 
       {state.kind === "conflict" && (
@@ -362,6 +406,17 @@ export function SchemeEditor({
         )}
       </Dialog>
 
+      <Dialog open={leave.blockedHref !== null} onClose={leave.stay} title="Your latest changes are not saved">
+        <div className="space-y-3 text-sm" data-testid="leave-dialog">
+          <p>{unsavedReason(state)}</p>
+          <p className="text-ink-soft">If you leave now, they stay in this browser and the editor offers them back when you return.</p>
+          <div className="flex flex-wrap gap-2">
+            <button type="button" className="btn-primary" onClick={leave.stay}>Stay on this scheme</button>
+            <button type="button" className="btn" onClick={leave.leave}>Leave; keep my changes in this browser</button>
+          </div>
+        </div>
+      </Dialog>
+
       <Dialog open={editing?.kind === "details"} onClose={() => setEditing(null)} title="Scheme details">
         {editing?.kind === "details" && (
           <DetailsForm
@@ -376,4 +431,17 @@ export function SchemeEditor({
       </Dialog>
     </div>
   );
+}
+
+function unsavedReason(state: SaveState): string {
+  switch (state.kind) {
+    case "conflict":
+      return `Someone else saved version ${state.current.version} while you were editing, so yours was not saved over it. Stay to choose which to keep.`;
+    case "invalid":
+      return `The server did not accept this version: ${state.messages.join(" ")}`;
+    case "error":
+      return state.message;
+    default:
+      return "Your changes could not be saved yet.";
+  }
 }

@@ -1,9 +1,10 @@
 "use client";
 import { useSortable } from "@dnd-kit/sortable";
-import { memo } from "react";
+import { memo, useContext } from "react";
 import { CSS } from "@dnd-kit/utilities";
 import type { DocStop } from "@/lib/spec/document";
 import { pitchText } from "./format";
+import { CarryContext } from "./carry-context";
 import { Pitch } from "./pitch";
 import { Treatment } from "./treatment-mark";
 
@@ -17,7 +18,20 @@ export function pipesWords(p: StopPipes): string {
   return `${p.total} pipes`;
 }
 
-export function DragHandle({ label, listeners, attributes, setRef }: { label: string; listeners?: object; attributes?: object; setRef?: (el: HTMLElement | null) => void }) {
+/** The grip of a stop or a division: the pointer drags it (dnd-kit), the keyboard carries it (division-board.tsx). */
+export function DragHandle({
+  label,
+  carry,
+  listeners,
+  attributes,
+  setRef,
+}: {
+  label: string;
+  carry: { type: "stop" | "division"; id: string };
+  listeners?: object;
+  attributes?: object;
+  setRef?: (el: HTMLElement | null) => void;
+}) {
   return (
     <button
       type="button"
@@ -26,6 +40,8 @@ export function DragHandle({ label, listeners, attributes, setRef }: { label: st
       className="cursor-grab touch-none rounded px-0.5 text-tin hover:bg-paper-deep hover:text-ink active:cursor-grabbing"
       {...attributes}
       {...listeners}
+      data-carry-type={carry.type}
+      data-carry-id={carry.id}
     >
       <svg viewBox="0 0 10 16" className="h-4 w-2.5" aria-hidden="true" fill="currentColor">
         <circle cx="2.5" cy="3" r="1.3" /><circle cx="7.5" cy="3" r="1.3" />
@@ -68,18 +84,21 @@ export function StopCard({ stop, pipes, divisionName, editable, disabledDrop, on
     data: { type: "stop", stopId: stop.id },
     disabled: editable ? { draggable: false, droppable: disabledDrop } : true,
   });
+  const carried = useContext(CarryContext);
+  const isCarried = carried?.type === "stop" && carried.id === stop.id;
   return (
     <li
       ref={setNodeRef}
       style={{ transform: CSS.Translate.toString(transform), transition }}
-      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] ${isDragging ? "z-10 border-brass opacity-80 shadow-md" : "border-tin-rule"}`}
+      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] ${isDragging ? "z-10 border-brass opacity-80 shadow-md" : isCarried ? "border-brass ring-2 ring-brass/60" : "border-tin-rule"}`}
+      data-carried={isCarried || undefined}
       data-testid={`stop-${stop.name}`}
       data-stop-id={stop.id}
       data-division={divisionName}
     >
       {editable && (
         <span className="pt-0.5">
-          <DragHandle label={`Move ${stop.name} ${pitchText(stop)}`} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />
+          <DragHandle label={`Move ${stop.name} ${pitchText(stop)}`} carry={{ type: "stop", id: stop.id }} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />
         </span>
       )}
       <CardBody stop={stop} pipesText={pipesWords(pipes)} onEdit={editable ? onEdit : undefined} />

@@ -3,13 +3,18 @@
  * Saving the editor's document: every edit is local at once; a pause of SAVE_DELAY_MS (or "Save now")
  * PUTs it with the version it was based on. A 409 stops saving and keeps both versions until the
  * designer chooses; a 422 shows the server's messages; nothing typed is dropped on any failure.
+ * Until it is saved, the work is also kept in the browser (unsaved-drafts.ts), and leaving the editor
+ * saves first (`flush`).
  */
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { SchemeDocument, SchemeRead } from "@/lib/spec/document";
 import { api, ApiError, fieldMessages } from "./api";
+import { clearDraft, writeDraft } from "./unsaved-drafts";
 
 export const SAVE_DELAY_MS = 800;
+/** How soon after an edit the browser copy is written (ms): off the path of the edit itself. */
+const DRAFT_DELAY_MS = 150;
 
 export type SaveState =
   | { kind: "saved" }
@@ -46,6 +51,8 @@ export function useSchemeSave({
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const stateRef = useRef<SaveState>(state);
   const saveRef = useRef<() => Promise<void>>(async () => {});
+  const inflightRef = useRef<Promise<void> | null>(null);
+  const draftTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const setState = useCallback((s: SaveState) => {
     stateRef.current = s;
     setStateRaw(s);
@@ -55,6 +62,14 @@ export function useSchemeSave({
     versionRef.current = v;
     setVersion(v);
   }, []);
+
+  /** Writes the unsaved document to the browser now, or forgets the copy once all is saved. */
+  const keepDraft = useCallback(() => {
+    if (draftTimer.current) clearTimeout(draftTimer.current);
+    draftTimer.current = null;
+    if (presentRef.current === savedRef.current) clearDraft(scheme.id);
+    else writeDraft({ schemeId: scheme.id, baseVersion: versionRef.current, savedAt: new Date().toISOString(), document: presentRef.current });
+  }, [scheme.id]);
 
   const { mutateAsync } = useMutation({
     mutationFn: (body: { version: number; document: SchemeDocument; note?: string }) => api.saveScheme(scheme.id, body),
@@ -73,6 +88,8 @@ export function useSchemeSave({
     const note = notes.length ? notes.join("; ").slice(0, 200) : undefined;
     sendingRef.current = doc;
     setState({ kind: "saving" });
+    let landed!: () => void;
+    inflightRef.current = new Promise<void>((resolve) => (landed = resolve));
     try {
       const { scheme: saved } = await mutateAsync({ version: versionRef.current, document: doc, note });
       savedRef.current = doc;
@@ -84,7 +101,10 @@ export function useSchemeSave({
       if (presentRef.current !== doc) {
         setState({ kind: "unsaved" });
         timer.current = setTimeout(() => void saveRef.current(), SAVE_DELAY_MS);
-      } else setState({ kind: "saved" });
+      } else {
+        setState({ kind: "saved" });
+        clearDraft(scheme.id);
+      }
     } catch (err) {
       sendingRef.current = null;
       if (err instanceof ApiError && err.status === 409) {
@@ -105,8 +125,29 @@ export function useSchemeSave({
       } else {
         setState({ kind: "error", message: err instanceof Error ? err.message : "The scheme could not be saved." });
       }
+    } finally {
+      inflightRef.current = null;
+      landed();
     }
   }, [mutateAsync, queryClient, scheme.id, setState, setVer]);
+
+  /**
+   * Saves whatever is pending and answers whether everything is now saved; false when a save was
+   * refused, conflicted or could not reach the server (the work stays here and in the browser copy).
+   */
+  const flush = useCallback(async (): Promise<boolean> => {
+    // Read afresh each time: a save in flight changes it meanwhile.
+    // A conflict or a refusal waits for the designer; a failed connection is worth one more try.
+    const waiting = () => ["conflict", "invalid"].includes(stateRef.current.kind);
+    for (let attempt = 0; attempt < 4; attempt++) {
+      if (inflightRef.current) await inflightRef.current;
+      if (presentRef.current === savedRef.current) return true;
+      if (waiting()) return false;
+      await saveRef.current();
+      if (waiting() || stateRef.current.kind === "error") return false;
+    }
+    return presentRef.current === savedRef.current;
+  }, []);
 
   useEffect(() => {
     saveRef.current = saveNow;
@@ -122,25 +163,46 @@ export function useSchemeSave({
       return;
     }
     if (label) notesRef.current.push(label);
+    if (draftTimer.current) clearTimeout(draftTimer.current);
+    draftTimer.current = setTimeout(keepDraft, DRAFT_DELAY_MS);
     const k = stateRef.current.kind;
     if (k === "conflict") return; // wait for the designer's choice
     if (k !== "saving") setState({ kind: "unsaved" });
     if (timer.current) clearTimeout(timer.current);
     timer.current = setTimeout(() => void saveRef.current(), SAVE_DELAY_MS);
-  }, [present, label, enabled, setState]);
+  }, [present, label, enabled, setState, keepDraft]);
 
-  useEffect(() => () => {
-    if (timer.current) clearTimeout(timer.current);
-  }, []);
+  // Leaving the editor by any way the link guard did not see (the browser's Back, say): the work is
+  // kept in the browser, and a save that can still be made is sent; the page's scripts live on.
+  useEffect(
+    () => () => {
+      if (timer.current) clearTimeout(timer.current);
+      if (!enabled || presentRef.current === savedRef.current) return;
+      keepDraft();
+      const k = stateRef.current.kind;
+      if (k === "unsaved" && !sendingRef.current) void saveRef.current();
+    },
+    [enabled, keepDraft],
+  );
 
-  // Closing the tab with unsaved work asks first.
+  // Closing the tab with unsaved work asks first, and keeps a copy in the browser in case it closes.
   useEffect(() => {
     const onBeforeUnload = (e: BeforeUnloadEvent) => {
-      if (presentRef.current !== savedRef.current) e.preventDefault();
+      if (presentRef.current !== savedRef.current) {
+        keepDraft();
+        e.preventDefault();
+      }
+    };
+    const onPageHide = () => {
+      if (presentRef.current !== savedRef.current) keepDraft();
     };
     window.addEventListener("beforeunload", onBeforeUnload);
-    return () => window.removeEventListener("beforeunload", onBeforeUnload);
-  }, []);
+    window.addEventListener("pagehide", onPageHide);
+    return () => {
+      window.removeEventListener("beforeunload", onBeforeUnload);
+      window.removeEventListener("pagehide", onPageHide);
+    };
+  }, [keepDraft]);
 
   /** The server's document is now the baseline (their version loaded, a revision restored). */
   const acceptServer = useCallback(
@@ -169,5 +231,11 @@ export function useSchemeSave({
   /** Someone else saved first (found by another request, e.g. a restore): offer the same choice as a save would. */
   const reportConflict = useCallback((current: SchemeRead) => setState({ kind: "conflict", current }), [setState]);
 
-  return { state, version, saveNow, acceptServer, saveOver, reportConflict };
+  /**
+   * The document about to be restored from the browser copy was based on `baseVersion`: save it
+   * against that version, so a newer one on the server leads to the conflict choice, not an overwrite.
+   */
+  const rebase = useCallback((baseVersion: number) => setVer(baseVersion), [setVer]);
+
+  return { state, version, saveNow, flush, acceptServer, saveOver, reportConflict, rebase };
 }

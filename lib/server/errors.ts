@@ -7,6 +7,7 @@ export const errorStatus = {
   not_found: 404,
   conflict: 409,
   invalid: 422,
+  unsupported_media_type: 415,
   bad_request: 400,
   unavailable: 503,
   internal: 500,

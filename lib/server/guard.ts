@@ -1,11 +1,14 @@
 import "server-only";
 import { getServerSession } from "next-auth";
+import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import type { z } from "zod";
 import { authOptions } from "@/app/(auth)/auth";
 import { getUserById } from "@/db/queries/users";
 import { can, roleLabels, type Permission, type Role } from "@/lib/roles";
+import { appOrigin } from "@/lib/env";
 import { AppError, errorResponse, invalid, toErrorBody, type FieldErrors } from "./errors";
+import { assertJsonBody, assertSameOrigin, foreignOriginProblem } from "./request-checks";
 
 export type SessionUser = { id: string; email: string; name: string; role: Role };
 
@@ -51,8 +54,8 @@ async function readJson(req: Request): Promise<unknown> {
 type RouteArgs<B, P> = { user: SessionUser; body: B; params: P; req: Request; url: URL };
 
 /**
- * Wraps a route handler: authenticate, check the role, parse the body with zod (422 with every
- * field path), then act. Errors become JSON with a typed code; no stack trace reaches a client.
+ * Wraps a route handler: refuse changes from other sites, authenticate, check the role, parse the
+ * JSON body with zod (422 with every field path), then act. Errors become JSON with a typed code; no stack trace reaches a client.
  * Authentication comes before parsing so an anonymous caller learns nothing about the API.
  */
 export function route<S extends z.ZodType | undefined = undefined, P = Record<string, string>>(
@@ -61,9 +64,11 @@ export function route<S extends z.ZodType | undefined = undefined, P = Record<st
 ) {
   return async (req: Request, ctx: { params: Promise<P> }): Promise<Response> => {
     try {
+      assertSameOrigin(req, appOrigin());
       const user = await requireUser(opts.permission);
       let body: unknown = undefined;
       if (opts.body) {
+        assertJsonBody(req);
         const parsed = opts.body.safeParse(await readJson(req));
         if (!parsed.success) throw invalid(parsed.error);
         body = parsed.data;
@@ -87,6 +92,8 @@ export function action<S extends z.ZodType, T>(
 ) {
   return async (raw: z.input<S>): Promise<ActionResult<T>> => {
     try {
+      const problem = foreignOriginProblem(await headers(), appOrigin());
+      if (problem) throw new AppError("forbidden", problem);
       const user = await requireUser(opts.permission);
       const parsed = opts.input.safeParse(raw);
       if (!parsed.success) throw invalid(parsed.error);

@@ -54,10 +54,10 @@ export async function signIn(user: Pick<TestUser, "email" | "password">): Promis
   return [...jar].map(([k, v]) => `${k}=${v}`).join("; ");
 }
 
-export async function api(path: string, init: { method?: string; cookie?: string; body?: unknown } = {}) {
+export async function api(path: string, init: { method?: string; cookie?: string; body?: unknown; headers?: Record<string, string> } = {}) {
   const res = await fetch(`${baseUrl}${path}`, {
     method: init.method ?? "GET",
-    headers: { ...(init.cookie ? { cookie: init.cookie } : {}), ...(init.body !== undefined ? { "content-type": "application/json" } : {}) },
+    headers: { ...(init.cookie ? { cookie: init.cookie } : {}), ...(init.body !== undefined ? { "content-type": "application/json" } : {}), ...init.headers },
     body: init.body === undefined ? undefined : typeof init.body === "string" ? init.body : JSON.stringify(init.body),
   });
   const text = await res.text();

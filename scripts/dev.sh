@@ -1,0 +1,12 @@
+#!/usr/bin/env bash
+# npm run dev: the development server against the demo cluster, with this checkout's own secret.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/setup.sh
+ensure_node_modules
+bash scripts/db.sh start
+export DATABASE_URL=${DATABASE_URL:-$(bash scripts/db.sh url)}
+port=${DEV_PORT:-3000}
+export NEXTAUTH_URL=http://127.0.0.1:$port
+export NEXTAUTH_SECRET=$(kept_secret .data/demo-secret)
+exec node_modules/.bin/next dev -H 127.0.0.1 -p "$port"
