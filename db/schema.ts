@@ -6,6 +6,7 @@ import {
 import { roles } from "../lib/roles";
 import { schemeStatuses } from "../lib/spec/document";
 import { projectStatuses } from "../lib/spec/projects";
+import { fileCategories } from "../lib/files/kinds";
 
 export const roleEnum = pgEnum("role", roles);
 
@@ -160,3 +161,48 @@ export type Scheme = typeof schemes.$inferSelect;
 export type DivisionRow = typeof divisions.$inferSelect;
 export type StopRow = typeof stops.$inferSelect;
 export type SchemeRevision = typeof schemeRevisions.$inferSelect;
+
+// ── Survey files ───────────────────────────────────────────────────────────────────────────────
+
+export const fileCategoryEnum = pgEnum("file_category", fileCategories);
+export const fileStatusEnum = pgEnum("file_status", ["pending", "ready"]);
+
+/**
+ * A survey photo, drawing or document of a project, kept in object storage under keys the server
+ * makes. A row is "pending" from the moment an upload link is issued until the server has checked
+ * the bytes (size, real type by content) and stored them under the final key; only "ready" files
+ * are listed or served. The link to a division or stop is by the scheme's own ids.
+ */
+export const projectFiles = pgTable(
+  "project_files",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    projectId: uuid("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    status: fileStatusEnum("status").notNull().default("pending"),
+    /** Where the browser uploads to; the bytes are moved to `objectKey` once checked. */
+    uploadKey: text("upload_key").notNull(),
+    objectKey: text("object_key"),
+    thumbnailKey: text("thumbnail_key"),
+    originalName: text("original_name").notNull(),
+    contentType: text("content_type"),
+    category: fileCategoryEnum("category").notNull().default("photo"),
+    sizeBytes: integer("size_bytes"),
+    width: integer("width"),
+    height: integer("height"),
+    caption: text("caption").notNull().default(""),
+    schemeId: uuid("scheme_id").references(() => schemes.id, { onDelete: "set null" }),
+    divisionId: text("division_id"),
+    stopId: text("stop_id"),
+    sharedWithClient: boolean("shared_with_client").notNull().default(false),
+    uploadedById: uuid("uploaded_by_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    completedAt: timestamp("completed_at", { withTimezone: true }),
+  },
+  (t) => [
+    index("project_files_project_idx").on(t.projectId, t.status),
+    index("project_files_stop_idx").on(t.schemeId, t.stopId),
+    check("project_files_one_link", sql`${t.divisionId} is null or ${t.stopId} is null`),
+  ],
+);
+
+export type ProjectFile = typeof projectFiles.$inferSelect;

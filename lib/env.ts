@@ -12,9 +12,11 @@ export const SECRET_MIN_LENGTH = 32;
 
 const LOCAL_DATABASE_URL = "postgres://stopwright@127.0.0.1:54329/stopwright";
 const LOCAL_APP_URL = "http://127.0.0.1:3000";
+/** The bucket the local object-storage fake creates (scripts/s3-fake.mjs); production names its own. */
+const LOCAL_BUCKET = "stopwright-files";
 
 export class SettingsError extends Error {
-  constructor(problems: string[]) {
+  constructor(readonly problems: string[]) {
     super(`Stopwright's settings are not complete:\n${problems.map((p) => `  - ${p}`).join("\n")}\nSee "Running in production" in README.md.`);
     this.name = "SettingsError";
   }
@@ -42,12 +44,33 @@ function create() {
       NEXTAUTH_URL: localDefault(site, LOCAL_APP_URL),
       NEXTAUTH_SECRET: z.string().optional(),
       NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+      // Object storage for survey files (any S3-compatible service). Without an endpoint the SDK
+      // uses AWS's own for the region; without keys, its usual credential chain (e.g. an instance role).
+      S3_ENDPOINT: z.url({ error: "is not a valid address: the object storage endpoint, e.g. https://s3.eu-west-2.amazonaws.com" }).optional(),
+      S3_REGION: z.string().min(1).default("us-east-1"),
+      S3_BUCKET: production ? z.string().min(3).optional() : z.string().min(3).default(LOCAL_BUCKET),
+      S3_ACCESS_KEY_ID: z.string().optional(),
+      S3_SECRET_ACCESS_KEY: z.string().optional(),
+      /** Path-style addresses (endpoint/bucket/key), which most S3-compatible services other than AWS need. */
+      S3_FORCE_PATH_STYLE: z.enum(["true", "false", "1", "0"]).default("false").transform((v) => v === "true" || v === "1"),
+      /** Largest survey file accepted, in MB (10⁶ bytes). */
+      UPLOAD_MAX_MB: z.coerce.number().positive().max(1000).default(25),
+      /** Lifetime of a signed link to a stored file, in seconds: short, because it works for whoever holds it. */
+      FILE_LINK_SECONDS: z.coerce.number().int().min(1).max(3600).default(60),
     },
     runtimeEnv: {
       DATABASE_URL: process.env.DATABASE_URL,
       NEXTAUTH_URL: process.env.NEXTAUTH_URL,
       NEXTAUTH_SECRET: process.env.NEXTAUTH_SECRET,
       NODE_ENV: process.env.NODE_ENV,
+      S3_ENDPOINT: process.env.S3_ENDPOINT,
+      S3_REGION: process.env.S3_REGION,
+      S3_BUCKET: process.env.S3_BUCKET,
+      S3_ACCESS_KEY_ID: process.env.S3_ACCESS_KEY_ID,
+      S3_SECRET_ACCESS_KEY: process.env.S3_SECRET_ACCESS_KEY,
+      S3_FORCE_PATH_STYLE: process.env.S3_FORCE_PATH_STYLE,
+      UPLOAD_MAX_MB: process.env.UPLOAD_MAX_MB,
+      FILE_LINK_SECONDS: process.env.FILE_LINK_SECONDS,
     },
     emptyStringAsUndefined: true,
     isServer: true,
@@ -83,10 +106,43 @@ export function authSecret(): string {
   return secret!;
 }
 
-/** Every setting the web server needs, checked at start; throws a SettingsError naming what to set. */
+/** Problems with the object-storage settings, in words an operator can act on; empty when they are fine. */
+export function storageProblems(settings: { S3_BUCKET?: string; S3_ACCESS_KEY_ID?: string; S3_SECRET_ACCESS_KEY?: string }): string[] {
+  const out: string[] = [];
+  if (!settings.S3_BUCKET) out.push("S3_BUCKET is not set: the name of the private bucket that keeps survey files, e.g. stopwright-files.");
+  if (!!settings.S3_ACCESS_KEY_ID !== !!settings.S3_SECRET_ACCESS_KEY) {
+    out.push("S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY go together: set both, or neither to use the machine's own credentials (e.g. an instance role).");
+  }
+  return out;
+}
+
+/** Every setting the web server needs, checked at start; throws one SettingsError naming everything to set. */
 export function checkServerSettings(): void {
-  env();
-  authSecret();
+  let settings: Env;
+  try {
+    settings = env();
+  } catch (err) {
+    if (err instanceof SettingsError) throw new SettingsError([...err.problems, ...secretProblems(process.env.NEXTAUTH_SECRET)]);
+    throw err;
+  }
+  const problems = [...secretProblems(settings.NEXTAUTH_SECRET), ...storageProblems(settings)];
+  if (problems.length) throw new SettingsError(problems);
+}
+
+/** Object-storage settings, checked: a server without a bucket cannot keep files. */
+export function storageSettings() {
+  const settings = env();
+  const problems = storageProblems(settings);
+  if (problems.length) throw new SettingsError(problems);
+  return {
+    endpoint: settings.S3_ENDPOINT,
+    region: settings.S3_REGION,
+    bucket: settings.S3_BUCKET!,
+    credentials: settings.S3_ACCESS_KEY_ID ? { accessKeyId: settings.S3_ACCESS_KEY_ID, secretAccessKey: settings.S3_SECRET_ACCESS_KEY! } : undefined,
+    forcePathStyle: settings.S3_FORCE_PATH_STYLE,
+    maxBytes: Math.round(settings.UPLOAD_MAX_MB * 1_000_000),
+    linkSeconds: settings.FILE_LINK_SECONDS,
+  };
 }
 
 /** The app's own origin (scheme, host and port), against which state-changing requests are checked. */

@@ -28,16 +28,21 @@ export const permissions = [
   "rates:manage",
   "quotes:issue",
   "notes:write",
+  /** Survey files: see them (clients: only those shared with the committee), add and describe them, share them. */
+  "files:read",
+  "files:write",
+  "files:share",
 ] as const;
 export type Permission = (typeof permissions)[number];
 
 const grants: Record<Role, readonly Permission[]> = {
   admin: permissions,
-  designer: ["projects:create", "projects:read", "projects:edit", "schemes:edit", "schemes:read", "revisions:read", "estimate:read", "money:read", "notes:write"],
-  estimator: ["projects:read", "schemes:read", "revisions:read", "estimate:read", "money:read", "rates:manage", "quotes:issue", "notes:write"],
-  workshop: ["projects:read", "schemes:read", "revisions:read", "estimate:read", "notes:write"],
-  // Clients see only shared schemes of their own projects, and never rates or margins.
-  client: ["projects:read", "schemes:read"],
+  designer: ["projects:create", "projects:read", "projects:edit", "schemes:edit", "schemes:read", "revisions:read", "estimate:read", "money:read", "notes:write", "files:read", "files:write", "files:share"],
+  estimator: ["projects:read", "schemes:read", "revisions:read", "estimate:read", "money:read", "rates:manage", "quotes:issue", "notes:write", "files:read", "files:write", "files:share"],
+  // The workshop makes much of the survey on site: it adds photos, but sharing is for the people who deal with the committee.
+  workshop: ["projects:read", "schemes:read", "revisions:read", "estimate:read", "notes:write", "files:read", "files:write"],
+  // Clients see only shared schemes and shared files of their own projects, and never rates or margins.
+  client: ["projects:read", "schemes:read", "files:read"],
 };
 
 export function can(role: Role, permission: Permission): boolean {

@@ -4,6 +4,7 @@
 set -uo pipefail
 cd "$(dirname "$0")/.."
 source scripts/setup.sh
+source scripts/s3-fake.sh
 
 ensure_apt postgresql chromium fonts-dejavu-core fonts-liberation || exit 1
 ensure_node_modules || exit 1
@@ -20,10 +21,15 @@ export BENCH_BASE_URL=$NEXTAUTH_URL
 server_pid=""
 cleanup() {
   [ -n "$server_pid" ] && kill "$server_pid" 2>/dev/null && wait "$server_pid" 2>/dev/null
+  stop_s3_fake
+  rm -rf .data/s3-bench
   bash scripts/db.sh stop --test >/dev/null 2>&1
 }
 trap cleanup EXIT
 bash scripts/db.sh start --test >/dev/null || exit 1
+# The seed stores the demo's survey files, so the bench has an object store of its own too.
+rm -rf .data/s3-bench
+S3_FAKE_PORT=${BENCH_S3_PORT:-4579} start_s3_fake .data/s3-bench "$NEXTAUTH_URL" >/dev/null || exit 1
 node_modules/.bin/tsx scripts/migrate.ts >/dev/null && node_modules/.bin/tsx db/seed.ts >/dev/null || exit 1
 node_modules/.bin/next build > /dev/null 2>&1 || { echo "build failed"; exit 1; }
 if curl -s -o /dev/null "$NEXTAUTH_URL/api/health"; then echo "error: port $port is already in use; stop what listens there" >&2; exit 1; fi

@@ -4,6 +4,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/setup.sh
+source scripts/s3-fake.sh
 
 ensure_apt postgresql
 ensure_node_modules
@@ -13,6 +14,10 @@ export DATABASE_URL=$(bash scripts/db.sh url)
 port=${DEMO_PORT:-3000}
 export NEXTAUTH_URL=http://127.0.0.1:$port
 export NEXTAUTH_SECRET=$(kept_secret .data/demo-secret)
+
+# The object-storage fake keeps the demo's files in .data/s3, beside the database.
+start_s3_fake .data/s3 "$NEXTAUTH_URL"
+trap stop_s3_fake EXIT
 
 node_modules/.bin/tsx scripts/migrate.ts
 node_modules/.bin/tsx db/seed.ts
@@ -25,4 +30,5 @@ Demo accounts (invented people of an invented firm):
 $(node_modules/.bin/tsx scripts/print-demo-accounts.ts)
 
 TXT
-exec node_modules/.bin/next start -H 127.0.0.1 -p "$port"
+# Not exec: the script stays to stop the fake when the server stops (Ctrl-C reaches both).
+node_modules/.bin/next start -H 127.0.0.1 -p "$port"

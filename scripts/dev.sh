@@ -3,10 +3,13 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/setup.sh
+source scripts/s3-fake.sh
 ensure_node_modules
 bash scripts/db.sh start
 export DATABASE_URL=${DATABASE_URL:-$(bash scripts/db.sh url)}
 port=${DEV_PORT:-3000}
 export NEXTAUTH_URL=http://127.0.0.1:$port
 export NEXTAUTH_SECRET=$(kept_secret .data/demo-secret)
-exec node_modules/.bin/next dev -H 127.0.0.1 -p "$port"
+start_s3_fake .data/s3 "$NEXTAUTH_URL"
+trap stop_s3_fake EXIT
+node_modules/.bin/next dev -H 127.0.0.1 -p "$port"

@@ -5,6 +5,7 @@
 set -uo pipefail
 cd "$(dirname "$0")/.."
 source scripts/setup.sh
+source scripts/s3-fake.sh
 
 ensure_apt postgresql chromium fonts-dejavu-core fonts-liberation || exit 1
 ensure_node_modules || exit 1
@@ -21,6 +22,8 @@ export NEXT_DIST_DIR=.next-test
 server_pid=""
 cleanup() {
   [ -n "$server_pid" ] && kill "$server_pid" 2>/dev/null && wait "$server_pid" 2>/dev/null
+  stop_s3_fake
+  rm -rf .data/s3-test
   bash scripts/db.sh stop --test >/dev/null 2>&1
 }
 trap cleanup EXIT
@@ -33,6 +36,10 @@ echo "── lint"; node_modules/.bin/eslint . --max-warnings=0; tally $? "lint 
 
 echo "── database and build"
 bash scripts/db.sh start --test || exit 1
+rm -rf .data/s3-test
+start_s3_fake .data/s3-test "$NEXTAUTH_URL" || exit 1
+# Signed links live a few seconds here, so a test can watch an old link stop working.
+export FILE_LINK_SECONDS=4
 node_modules/.bin/tsx scripts/migrate.ts || exit 1
 if ! node_modules/.bin/next build > "$out/build.log" 2>&1; then cat "$out/build.log"; tally 1 "production build"; else tally 0 "production build"; fi
 
