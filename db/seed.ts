@@ -1,13 +1,18 @@
 // Seeds the invented demo scenario. Idempotent: a second run changes nothing.
 import bcrypt from "bcryptjs";
 import { drizzle } from "drizzle-orm/node-postgres";
-import { eq } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { Pool } from "pg";
 import { env } from "../lib/env";
 import { schemeDocumentSchema } from "../lib/spec/document";
 import { demoAccounts, demoFirm } from "./demo-accounts";
-import { demoProjects } from "./demo-scenario";
-import { insertScheme } from "./scheme-store";
+import { demoProjects, restoreScheme } from "./demo-scenario";
+import { insertScheme, type Store } from "./scheme-store";
+import { parishSurveyFiles } from "./demo-files";
+import { inspectFile } from "../lib/server/file-check";
+import { fileKeys, writeObject } from "../lib/server/storage";
+import { storageSettings } from "../lib/env";
+import { acceptedTypes } from "../lib/files/kinds";
 import * as schema from "./schema";
 
 async function main() {
@@ -37,10 +42,59 @@ async function main() {
           if (demo.shared[i]) await tx.update(schema.schemes).set({ sharedWithClient: true, status: "proposed" }).where(eq(schema.schemes.id, scheme.id));
         }
       }
+      await seedSurveyFiles(tx, demoProjects[0]!.project.name, ids.get("workshop")!);
     });
     console.log("demo data in place");
   } finally {
     await pool.end();
+  }
+}
+
+/**
+ * The parish's survey files, stored the way an upload is (checked by content, thumbnail made, the
+ * server's own keys), once: a project that already has files is left alone.
+ */
+async function seedSurveyFiles(tx: Store, projectName: string, uploaderId: string) {
+  const [project] = await tx.select({ id: schema.projects.id }).from(schema.projects).where(eq(schema.projects.name, projectName)).limit(1);
+  if (!project) return;
+  const [any] = await tx.select({ id: schema.projectFiles.id }).from(schema.projectFiles).where(eq(schema.projectFiles.projectId, project.id)).limit(1);
+  if (any) return;
+  const [schemeA] = await tx
+    .select({ id: schema.schemes.id })
+    .from(schema.schemes)
+    .where(and(eq(schema.schemes.projectId, project.id), eq(schema.schemes.name, restoreScheme.name)))
+    .limit(1);
+  const { maxBytes } = storageSettings();
+  for (const f of parishSurveyFiles) {
+    const bytes = await f.bytes();
+    const checked = await inspectFile(f.name, bytes, maxBytes);
+    if (!checked.ok) throw new Error(`demo file ${f.name}: ${checked.message}`);
+    const id = crypto.randomUUID();
+    const objectKey = fileKeys.originalKey(project.id, id, acceptedTypes[checked.type].extensions[0]);
+    await writeObject(objectKey, bytes, checked.type);
+    const thumbnailKey = checked.thumbnail ? fileKeys.thumbnailKey(project.id, id) : null;
+    if (thumbnailKey) await writeObject(thumbnailKey, checked.thumbnail!, "image/jpeg");
+    await tx.insert(schema.projectFiles).values({
+      id,
+      projectId: project.id,
+      status: "ready",
+      uploadKey: fileKeys.uploadKey(project.id, id),
+      objectKey,
+      thumbnailKey,
+      originalName: f.name,
+      contentType: checked.type,
+      category: f.category,
+      sizeBytes: bytes.length,
+      width: checked.width,
+      height: checked.height,
+      caption: f.caption,
+      schemeId: f.link && schemeA ? schemeA.id : null,
+      divisionId: f.link?.divisionId ?? null,
+      stopId: f.link?.stopId ?? null,
+      sharedWithClient: !!f.shared,
+      uploadedById: uploaderId,
+      completedAt: new Date(),
+    });
   }
 }
 

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useCallback, useEffect, useMemo, useReducer, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
+import { StopFiles } from "@/components/files/stop-files";
 import { Dialog } from "@/components/ui/dialog";
 import { StateMark } from "@/components/ui/state-mark";
 import { schemeDocumentSchema, type SchemeDocument, type SchemeRead } from "@/lib/spec/document";
@@ -381,6 +382,7 @@ export function SchemeEditor({
             }
           />
         )}
+        {editingStop && <StopFiles projectId={projectId} schemeId={initialScheme.id} stopId={editingStop.stop.id} stopName={editingStop.stop.name} mayAdd={editable} />}
       </Dialog>
 
       <Dialog open={editing?.kind === "division"} onClose={() => setEditing(null)} title={editingDivision ? `Division: ${editingDivision.name}` : "New division"} wide>

@@ -273,3 +273,37 @@ export async function fileContentLink({ user, fileId, variant, attachment }: { u
   }
   return signedDownloadUrl(file.objectKey!, { fileName: file.originalName, contentType: file.contentType!, attachment });
 }
+
+export type LinkTarget = { schemeId: string; schemeName: string; divisions: { id: string; name: string; stops: { id: string; name: string; footage: string | number; ranks: number; family: string }[] }[] };
+
+/** The schemes of a project the user may see, with their divisions and stops in order: what a file may be linked to. */
+export async function listLinkTargets({ user, projectId }: { user: SessionUser; projectId: string }): Promise<LinkTarget[]> {
+  await loadProjectFor({ user, projectId });
+  const schemeRows = await db
+    .select({ id: schemes.id, name: schemes.name })
+    .from(schemes)
+    .where(and(eq(schemes.projectId, projectId), user.role === "client" ? eq(schemes.sharedWithClient, true) : undefined))
+    .orderBy(asc(schemes.createdAt));
+  if (!schemeRows.length) return [];
+  const ids = schemeRows.map((s) => s.id);
+  const [divisionRows, stopRows] = await Promise.all([
+    db.select({ schemeId: divisions.schemeId, id: divisions.id, name: divisions.name }).from(divisions).where(inArray(divisions.schemeId, ids)).orderBy(asc(divisions.position)),
+    db.select({ schemeId: stops.schemeId, divisionId: stops.divisionId, id: stops.id, name: stops.name, props: stops.props }).from(stops).where(inArray(stops.schemeId, ids)).orderBy(asc(stops.position)),
+  ]);
+  return schemeRows.map((s) => ({
+    schemeId: s.id,
+    schemeName: s.name,
+    divisions: divisionRows
+      .filter((d) => d.schemeId === s.id)
+      .map((d) => ({
+        id: d.id,
+        name: d.name,
+        stops: stopRows
+          .filter((st) => st.schemeId === s.id && st.divisionId === d.id)
+          .map((st) => {
+            const p = st.props as { footage?: string | number; ranks?: number; family?: string };
+            return { id: st.id, name: st.name, footage: p.footage ?? "", ranks: p.ranks ?? 1, family: p.family ?? "" };
+          }),
+      })),
+  }));
+}

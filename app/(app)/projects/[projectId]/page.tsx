@@ -9,6 +9,7 @@ import { projectStatusLabels } from "@/lib/spec/projects";
 import { ArchiveButton } from "./archive-button";
 import { MembersPanel } from "./members-panel";
 import { ProjectDetailsForm } from "./project-details-form";
+import { ProjectLinks } from "./project-links";
 import { SchemesList } from "./schemes-list";
 
 export const metadata: Metadata = { title: "Project" };
@@ -44,6 +45,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
         </div>
         {mayEdit && <ArchiveButton projectId={project.id} archived={project.archived} />}
       </div>
+      <ProjectLinks projectId={project.id} role={user.role} />
       <div className="grid gap-6 xl:grid-cols-[1fr_26rem]">
         <div className="min-w-0 space-y-6">
           <SchemesList projectId={project.id} schemes={schemes} mayEdit={can(user.role, "schemes:edit")} />

@@ -15,9 +15,11 @@ export default async function StopListPage({ params }: { params: Promise<{ proje
   const doc = scheme.document;
   return (
     <article className="mx-auto max-w-5xl bg-paper-card px-8 py-8 shadow-sm print:max-w-none print:bg-white print:p-0 print:shadow-none">
-      <div className="mb-4 flex items-center gap-3 print:hidden">
+      <div className="mb-4 flex flex-wrap items-center gap-3 print:hidden">
         <Link href={`/projects/${projectId}/schemes/${schemeId}`} className="btn">← Back to the editor</Link>
         <PrintButton />
+        <a className="btn" href={`/api/schemes/${schemeId}/export?format=csv`} download>Download CSV</a>
+        <a className="btn" href={`/api/schemes/${schemeId}/export`} download>Download scheme file (JSON)</a>
       </div>
       <header className="mb-6 border-b border-ink pb-3 text-center font-serif">
         <p className="text-sm uppercase tracking-[0.2em] text-ink-soft">{project.clientName}{project.venue && ` · ${project.venue}`}</p>
