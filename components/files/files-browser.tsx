@@ -246,13 +246,13 @@ export function FilesBrowser({ projectId, targets, mayWrite, mayShare, initialLi
             <tbody>
               {[...papers, ...pictures].map((f) => (
                 <tr key={f.id} className="border-t border-tin-rule align-top">
-                  <td className="px-4 py-2"><a className="underline decoration-tin-rule underline-offset-2 hover:decoration-brass" href={`${f.url}?download=1`}>{f.name}</a></td>
+                  <td className="min-w-40 px-4 py-2"><a className="break-all underline decoration-tin-rule underline-offset-2 hover:decoration-brass" href={`${f.url}?download=1`}>{f.name}</a></td>
                   <td className="px-4 py-2">{fileCategoryLabels[f.category]}</td>
-                  <td className="px-4 py-2">{f.caption}</td>
-                  <td className="px-4 py-2 text-ink-soft">{f.link ? linkWords(f.link) : "—"}</td>
-                  <td className="px-4 py-2 text-right num">{formatBytes(f.sizeBytes)}</td>
+                  <td className="min-w-56 px-4 py-2">{f.caption}</td>
+                  <td className="min-w-40 px-4 py-2 text-ink-soft">{f.link ? linkWords(f.link) : "—"}</td>
+                  <td className="whitespace-nowrap px-4 py-2 text-right num">{formatBytes(f.sizeBytes)}</td>
                   <td className="px-4 py-2"><SharedMark shared={f.sharedWithClient} /></td>
-                  <td className="px-4 py-2 text-xs num">{formatDateTime(f.createdAt)}{f.uploadedByName && <span className="block text-tin">{f.uploadedByName}</span>}</td>
+                  <td className="min-w-32 px-4 py-2 text-xs num">{formatDateTime(f.createdAt)}{f.uploadedByName && <span className="block text-tin">{f.uploadedByName}</span>}</td>
                   <td className="px-4 py-2 text-right">{mayWrite && <button type="button" className="btn py-1 text-xs" onClick={() => setEditing(f)}>Edit</button>}</td>
                 </tr>
               ))}
