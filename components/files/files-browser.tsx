@@ -192,7 +192,15 @@ export function FileThumb({ file, className = "" }: { file: SurveyFile; classNam
   return <img src={file.thumbnailUrl} alt={file.caption || file.name} loading="lazy" className={`object-cover ${className}`} />;
 }
 
-export function FilesBrowser({ projectId, targets, mayWrite, mayShare, initialLink }: { projectId: string; targets: LinkTarget[]; mayWrite: boolean; mayShare: boolean; initialLink: string }) {
+export function FilesBrowser({ projectId, targets, mayWrite, mayShare, initialLink, committeeView }: {
+  projectId: string;
+  targets: LinkTarget[];
+  mayWrite: boolean;
+  mayShare: boolean;
+  initialLink: string;
+  /** A committee member sees only shared files, so no word about sharing. */
+  committeeView: boolean;
+}) {
   const files = useQuery({ queryKey: fileQueryKeys.list(projectId), queryFn: () => listFiles(projectId) });
   const [editing, setEditing] = useState<SurveyFile | null>(null);
   const all = files.data ?? [];
@@ -217,7 +225,7 @@ export function FilesBrowser({ projectId, targets, mayWrite, mayShare, initialLi
                 <p className="text-sm leading-snug text-ink">{f.caption || <span className="text-tin">{f.name}</span>}</p>
                 {f.link && <p className="text-ink-soft"><span aria-hidden="true">↳ </span>{linkWords(f.link)}</p>}
                 <p className="mt-auto flex flex-wrap items-center gap-2 pt-1 text-tin">
-                  <SharedMark shared={f.sharedWithClient} />
+                  {!committeeView && <SharedMark shared={f.sharedWithClient} />}
                   <span className="num">{f.width && f.height ? `${f.width}×${f.height}` : ""}</span>
                   {mayWrite && <button type="button" className="ml-auto underline underline-offset-2 hover:text-ink" onClick={() => setEditing(f)} aria-label={`Edit ${f.name}`}>Edit</button>}
                 </p>
@@ -238,7 +246,7 @@ export function FilesBrowser({ projectId, targets, mayWrite, mayShare, initialLi
                 <th className="px-4 py-2">Caption</th>
                 <th className="px-4 py-2">Shows</th>
                 <th className="px-4 py-2 text-right">Size</th>
-                <th className="px-4 py-2">Committee</th>
+                {!committeeView && <th className="px-4 py-2">Committee</th>}
                 <th className="px-4 py-2">Added</th>
                 <th className="px-4 py-2"><span className="sr-only">Actions</span></th>
               </tr>
@@ -251,7 +259,7 @@ export function FilesBrowser({ projectId, targets, mayWrite, mayShare, initialLi
                   <td className="min-w-56 px-4 py-2">{f.caption}</td>
                   <td className="min-w-40 px-4 py-2 text-ink-soft">{f.link ? linkWords(f.link) : "—"}</td>
                   <td className="whitespace-nowrap px-4 py-2 text-right num">{formatBytes(f.sizeBytes)}</td>
-                  <td className="px-4 py-2"><SharedMark shared={f.sharedWithClient} /></td>
+                  {!committeeView && <td className="px-4 py-2"><SharedMark shared={f.sharedWithClient} /></td>}
                   <td className="min-w-32 px-4 py-2 text-xs num">{formatDateTime(f.createdAt)}{f.uploadedByName && <span className="block text-tin">{f.uploadedByName}</span>}</td>
                   <td className="px-4 py-2 text-right">{mayWrite && <button type="button" className="btn py-1 text-xs" onClick={() => setEditing(f)}>Edit</button>}</td>
                 </tr>

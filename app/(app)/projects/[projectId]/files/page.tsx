@@ -46,7 +46,7 @@ export default async function ProjectFilesPage({ params, searchParams }: { param
           </Caution>
         )}
       </div>
-      <FilesBrowser projectId={project.id} targets={targets} mayWrite={can(user.role, "files:write") && !project.archived} mayShare={can(user.role, "files:share")} initialLink={initialLink} />
+      <FilesBrowser projectId={project.id} targets={targets} mayWrite={can(user.role, "files:write") && !project.archived} mayShare={can(user.role, "files:share")} initialLink={initialLink} committeeView={user.role === "client"} />
     </div>
   );
 }

@@ -5,6 +5,7 @@ import { ImportPanel } from "@/components/stop-lists/import-panel";
 import { getProjectForUser } from "@/db/queries/projects";
 import { AppError } from "@/lib/server/errors";
 import { requirePageUser } from "@/lib/server/guard";
+import { stopListColumns } from "@/lib/spec/stop-list-csv";
 
 export const metadata: Metadata = { title: "Import a stop list" };
 
@@ -29,9 +30,18 @@ export default async function ImportPage({ params }: { params: Promise<{ project
         </nav>
         <h1 className="text-3xl font-semibold">Import a stop list</h1>
         <p className="text-ink-soft">
-          A spreadsheet saved as CSV, one row per stop (columns in <em>docs/stop-list-csv.md</em>), or a Stopwright scheme file (.json).
-          You see what will be created, or every problem by row, before anything is saved.
+          A spreadsheet saved as CSV, one row per stop, or a Stopwright scheme file (.json). You see what will be created, or every
+          problem by row, before anything is saved.
         </p>
+        <details className="mt-2 text-sm">
+          <summary className="cursor-pointer text-ink-soft underline decoration-tin-rule underline-offset-2">Which columns does a CSV stop list have?</summary>
+          <p className="mt-2 text-ink-soft">
+            A heading row, then one row per stop. <strong>division</strong>, <strong>name</strong>, <strong>pitch</strong> (8′, 16&apos;, 2⅔, 2 2/3 …)
+            and <strong>family</strong> are needed; every other column may be left out or empty and takes its usual value. A stop list
+            downloaded from Stopwright has them all:
+          </p>
+          <p className="mt-1 font-mono text-xs text-ink-soft">{stopListColumns().map((c) => c.header).join(", ")}</p>
+        </details>
       </div>
       {project.archived ? (
         <p className="panel p-4 text-sm">This project is archived; bring it back from the archive to import into it.</p>
