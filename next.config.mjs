@@ -4,6 +4,8 @@ const nextConfig = {
   distDir: process.env.NEXT_DIST_DIR || ".next",
   poweredByHeader: false,
   reactStrictMode: true,
+  // Loaded from node_modules at run time rather than bundled: the mail queue and the SMTP client.
+  serverExternalPackages: ["pg-boss", "nodemailer"],
 };
 
 export default nextConfig;

@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import {
-  boolean, check, date, doublePrecision, foreignKey, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp,
+  boolean, check, customType, date, doublePrecision, foreignKey, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp,
   uniqueIndex, uuid, type AnyPgColumn,
 } from "drizzle-orm/pg-core";
 import { roles } from "../lib/roles";
@@ -206,3 +206,129 @@ export const projectFiles = pgTable(
 );
 
 export type ProjectFile = typeof projectFiles.$inferSelect;
+
+// ── Outgoing mail: the outbox ──────────────────────────────────────────────────────────────────
+
+/** Raw bytes (PostgreSQL bytea), read and written as Node Buffers. */
+const bytea = customType<{ data: Buffer; driverData: Buffer }>({ dataType: () => "bytea" });
+
+export const mailStatuses = ["queued", "sent", "failed"] as const;
+export const mailStatusEnum = pgEnum("mail_status", mailStatuses);
+
+/**
+ * Every message the app queued (lib/mail), with its delivery state. The queue and its retries live
+ * in pg-boss's own schema; this table is what the firm can read back ("Outgoing mail").
+ */
+export const outgoingMail = pgTable(
+  "outgoing_mail",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    /** What kind of message, e.g. "invitation", "scheme-shared", "comment". */
+    kind: text("kind").notNull(),
+    to: text("to").array().notNull(),
+    subject: text("subject").notNull(),
+    text: text("text").notNull(),
+    html: text("html"),
+    /** The links the message carries, so they can be listed and followed: [{ label, url }]. */
+    links: jsonb("links").$type<{ label: string; url: string }[]>().notNull().default([]),
+    status: mailStatusEnum("status").notNull().default("queued"),
+    attempts: integer("attempts").notNull().default(0),
+    lastError: text("last_error"),
+    /** The Message-ID the SMTP server accepted. */
+    messageId: text("message_id"),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    lastAttemptAt: timestamp("last_attempt_at", { withTimezone: true }),
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+  },
+  (t) => [index("outgoing_mail_created_idx").on(t.createdAt), index("outgoing_mail_status_idx").on(t.status)],
+);
+
+export const outgoingMailAttachments = pgTable(
+  "outgoing_mail_attachments",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    mailId: uuid("mail_id").notNull().references(() => outgoingMail.id, { onDelete: "cascade" }),
+    filename: text("filename").notNull(),
+    contentType: text("content_type").notNull(),
+    content: bytea("content").notNull(),
+    sizeBytes: integer("size_bytes").notNull(),
+  },
+  (t) => [index("outgoing_mail_attachments_mail_idx").on(t.mailId)],
+);
+
+export type OutgoingMail = typeof outgoingMail.$inferSelect;
+
+// ── The committee: invitations, comments, firm notes, preferences ─────────────────────────────
+
+/**
+ * An invitation to join one project's committee. The link carries a random token; only its SHA-256
+ * is stored, so the table alone cannot be used to join. Single use: accepting sets acceptedAt.
+ */
+export const invitations = pgTable(
+  "invitations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    projectId: uuid("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    name: text("name").notNull(),
+    tokenHash: text("token_hash").notNull(),
+    invitedById: uuid("invited_by_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    sentAt: timestamp("sent_at", { withTimezone: true }).notNull().defaultNow(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+    acceptedUserId: uuid("accepted_user_id").references(() => users.id, { onDelete: "set null" }),
+    withdrawnAt: timestamp("withdrawn_at", { withTimezone: true }),
+  },
+  (t) => [
+    uniqueIndex("invitations_token_key").on(t.tokenHash),
+    index("invitations_project_idx").on(t.projectId),
+    check("invitations_email_lowercase", sql`${t.email} = lower(${t.email})`),
+  ],
+);
+
+/** A comment on a scheme, optionally on one of its stops; read by the firm and the project's committee. */
+export const schemeComments = pgTable(
+  "scheme_comments",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    schemeId: uuid("scheme_id").notNull().references(() => schemes.id, { onDelete: "cascade" }),
+    /** The stop's id in the scheme document, and its name and pitch when the comment was made. */
+    stopId: text("stop_id"),
+    stopLabel: text("stop_label"),
+    authorId: uuid("author_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    body: text("body").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("scheme_comments_scheme_idx").on(t.schemeId, t.createdAt)],
+);
+
+/** The firm's own notes on a scheme: a table of their own, so no query for comments can reach them. */
+export const schemeNotes = pgTable(
+  "scheme_notes",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    schemeId: uuid("scheme_id").notNull().references(() => schemes.id, { onDelete: "cascade" }),
+    stopId: text("stop_id"),
+    stopLabel: text("stop_label"),
+    authorId: uuid("author_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    body: text("body").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("scheme_notes_scheme_idx").on(t.schemeId, t.createdAt)],
+);
+
+/** Each committee member's one preferred scheme of a project. */
+export const schemePreferences = pgTable(
+  "scheme_preferences",
+  {
+    projectId: uuid("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    schemeId: uuid("scheme_id").notNull().references(() => schemes.id, { onDelete: "cascade" }),
+    note: text("note").notNull().default(""),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.projectId, t.userId] })],
+);
+
+export type Invitation = typeof invitations.$inferSelect;

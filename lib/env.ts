@@ -57,6 +57,13 @@ function create() {
       UPLOAD_MAX_MB: z.coerce.number().positive().max(1000).default(25),
       /** Lifetime of a signed link to a stored file, in seconds: short, because it works for whoever holds it. */
       FILE_LINK_SECONDS: z.coerce.number().int().min(1).max(3600).default(60),
+      // Outgoing mail (lib/mail): a production server must name its SMTP server and sender (mailProblems).
+      SMTP_HOST: z.string().optional(),
+      SMTP_PORT: z.coerce.number({ error: "is not a port number, e.g. 587" }).int().min(1).max(65535).optional(),
+      SMTP_SECURITY: z.enum(["starttls", "tls", "none"], { error: "must be starttls, tls or none" }).optional(),
+      SMTP_USER: z.string().optional(),
+      SMTP_PASSWORD: z.string().optional(),
+      MAIL_FROM: z.string().optional(),
     },
     runtimeEnv: {
       DATABASE_URL: process.env.DATABASE_URL,
@@ -71,6 +78,12 @@ function create() {
       S3_FORCE_PATH_STYLE: process.env.S3_FORCE_PATH_STYLE,
       UPLOAD_MAX_MB: process.env.UPLOAD_MAX_MB,
       FILE_LINK_SECONDS: process.env.FILE_LINK_SECONDS,
+      SMTP_HOST: process.env.SMTP_HOST,
+      SMTP_PORT: process.env.SMTP_PORT,
+      SMTP_SECURITY: process.env.SMTP_SECURITY,
+      SMTP_USER: process.env.SMTP_USER,
+      SMTP_PASSWORD: process.env.SMTP_PASSWORD,
+      MAIL_FROM: process.env.MAIL_FROM,
     },
     emptyStringAsUndefined: true,
     isServer: true,
@@ -125,8 +138,54 @@ export function checkServerSettings(): void {
     if (err instanceof SettingsError) throw new SettingsError([...err.problems, ...secretProblems(process.env.NEXTAUTH_SECRET)]);
     throw err;
   }
-  const problems = [...secretProblems(settings.NEXTAUTH_SECRET), ...storageProblems(settings)];
+  const problems = [...secretProblems(settings.NEXTAUTH_SECRET), ...storageProblems(settings), ...mailProblems(settings, isProductionServer())];
   if (problems.length) throw new SettingsError(problems);
+}
+
+/** Problems with the mail settings, in words an operator can act on; empty when they are fine. */
+export function mailProblems(settings: { SMTP_HOST?: string; MAIL_FROM?: string; SMTP_USER?: string; SMTP_PASSWORD?: string }, production: boolean): string[] {
+  const out: string[] = [];
+  if (production && !settings.SMTP_HOST) out.push("SMTP_HOST is not set: the SMTP server that sends Stopwright's mail, e.g. smtp.example-mail.com.");
+  if (production && !settings.MAIL_FROM) out.push('MAIL_FROM is not set: the sender of Stopwright\'s mail, e.g. "Your Firm <office@example-firm.com>".');
+  if (settings.SMTP_USER && !settings.SMTP_PASSWORD) out.push("SMTP_USER is set but SMTP_PASSWORD is not: set both, or neither for a server that needs no sign-in.");
+  return out;
+}
+
+export type MailSettings = {
+  host: string;
+  port: number;
+  /** starttls: plain connection upgraded with STARTTLS, which is then required (port 587);
+   *  tls: TLS from the first byte (port 465); none: no encryption (a relay on a private network). */
+  security: "starttls" | "tls" | "none";
+  user: string | undefined;
+  password: string | undefined;
+  /** The sender, e.g. "Corvin Lathe Organ Builders <office@corvinlathe.example>". */
+  from: string;
+};
+
+/**
+ * Where outgoing mail goes. A production server must name its SMTP server and sender; local tools
+ * (demo, tests, dev) default to a plain relay on 127.0.0.1:2525, which their scripts start.
+ */
+export function mailSettings(): MailSettings {
+  const e = env();
+  const production = isProductionServer();
+  const problems = mailProblems(e, production);
+  if (problems.length) throw new SettingsError(problems);
+  const security = e.SMTP_SECURITY ?? (production ? "starttls" : "none");
+  return {
+    host: e.SMTP_HOST ?? "127.0.0.1",
+    port: e.SMTP_PORT ?? (production ? (security === "tls" ? 465 : 587) : 2525),
+    security,
+    user: e.SMTP_USER,
+    password: e.SMTP_PASSWORD,
+    from: e.MAIL_FROM ?? "Stopwright <mail@stopwright.localhost>",
+  };
+}
+
+/** True while `next build` runs: no server work (such as the mail worker) starts then. */
+export function isBuildPhase(): boolean {
+  return process.env.NEXT_PHASE === "phase-production-build";
 }
 
 /** Object-storage settings, checked: a server without a bucket cannot keep files. */

@@ -18,11 +18,15 @@ port=${BENCH_APP_PORT:-3200}
 export DATABASE_URL=$(bash scripts/db.sh url --test)
 export NEXTAUTH_URL=http://127.0.0.1:$port NEXTAUTH_SECRET=$(random_secret) NEXT_DIST_DIR=.next-bench
 export BENCH_BASE_URL=$NEXTAUTH_URL
+# The demo data queues mail: it goes to a stand-in of the bench's own, never to another checkout's.
+export SMTP_HOST=127.0.0.1 SMTP_PORT=${BENCH_SMTP_PORT:-2545} SMTP_SECURITY=none
 server_pid=""
+fake_smtp_pid=""
 cleanup() {
   [ -n "$server_pid" ] && kill "$server_pid" 2>/dev/null && wait "$server_pid" 2>/dev/null
   stop_s3_fake
   rm -rf .data/s3-bench
+  [ -n "$fake_smtp_pid" ] && kill "$fake_smtp_pid" 2>/dev/null && wait "$fake_smtp_pid" 2>/dev/null
   bash scripts/db.sh stop --test >/dev/null 2>&1
 }
 trap cleanup EXIT
@@ -33,6 +37,8 @@ S3_FAKE_PORT=${BENCH_S3_PORT:-4579} start_s3_fake .data/s3-bench "$NEXTAUTH_URL"
 node_modules/.bin/tsx scripts/migrate.ts >/dev/null && node_modules/.bin/tsx db/seed.ts >/dev/null || exit 1
 node_modules/.bin/next build > /dev/null 2>&1 || { echo "build failed"; exit 1; }
 if curl -s -o /dev/null "$NEXTAUTH_URL/api/health"; then echo "error: port $port is already in use; stop what listens there" >&2; exit 1; fi
+rm -rf .data/bench-mail
+start_fake_smtp "$SMTP_PORT" .data/bench-mail > /dev/null || exit 1
 node_modules/.bin/next start -H 127.0.0.1 -p "$port" > /dev/null 2>&1 &
 server_pid=$!
 for _ in $(seq 1 60); do curl -sf "$NEXTAUTH_URL/api/health" >/dev/null && break; sleep 0.5; done

@@ -30,3 +30,13 @@ kept_secret() {
   [ -s "$1" ] || (umask 077; random_secret > "$1")
   cat "$1"
 }
+
+# The local SMTP stand-in (scripts/fake-smtp.mjs) on 127.0.0.1:PORT, keeping mail in FOLDER.
+#   start_fake_smtp PORT FOLDER   sets fake_smtp_pid; fails when the port is taken
+start_fake_smtp() {
+  if (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; then echo "error: port $1 (SMTP) is already in use; set another with the SMTP port variable" >&2; return 1; fi
+  node scripts/fake-smtp.mjs "$1" "$2" &
+  fake_smtp_pid=$!
+  for _ in $(seq 1 40); do (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null && return 0; sleep 0.1; done
+  echo "error: the fake SMTP server did not start on port $1" >&2; return 1
+}

@@ -18,12 +18,18 @@ export NEXTAUTH_URL=http://127.0.0.1:$port
 export NEXTAUTH_SECRET=$(random_secret)
 export E2E_BASE_URL=$NEXTAUTH_URL
 export NEXT_DIST_DIR=.next-test
+# Mail goes to the local SMTP stand-in; the tests read what it received from $TEST_MAIL_DIR.
+export SMTP_HOST=127.0.0.1 SMTP_PORT=${SMTP_TEST_PORT:-2535} SMTP_SECURITY=none
+export MAIL_FROM="Stopwright tests <mail@stopwright.test>"
+export TEST_MAIL_DIR=$(pwd)/.data/test-mail
 
 server_pid=""
+fake_smtp_pid=""
 cleanup() {
   [ -n "$server_pid" ] && kill "$server_pid" 2>/dev/null && wait "$server_pid" 2>/dev/null
   stop_s3_fake
   rm -rf .data/s3-test
+  [ -n "$fake_smtp_pid" ] && kill "$fake_smtp_pid" 2>/dev/null && wait "$fake_smtp_pid" 2>/dev/null
   bash scripts/db.sh stop --test >/dev/null 2>&1
 }
 trap cleanup EXIT
@@ -45,6 +51,8 @@ if ! node_modules/.bin/next build > "$out/build.log" 2>&1; then cat "$out/build.
 
 # Another server on the port would answer in place of this build.
 if curl -s -o /dev/null "$NEXTAUTH_URL/api/health"; then echo "error: port $port is already in use; stop what listens there" >&2; exit 1; fi
+rm -rf "$TEST_MAIL_DIR"
+start_fake_smtp "$SMTP_PORT" "$TEST_MAIL_DIR" > "$out/fake-smtp.log" 2>&1 || exit 1
 node_modules/.bin/next start -H 127.0.0.1 -p "$port" > "$out/server.log" 2>&1 &
 server_pid=$!
 for _ in $(seq 1 60); do curl -sf "$NEXTAUTH_URL/api/health" >/dev/null && break; sleep 0.5; done
