@@ -17,8 +17,8 @@ export default function proxy(req: NextRequestWithAuth, event: NextFetchEvent) {
     if (problem) return NextResponse.json({ error: { code: "forbidden", message: problem } }, { status: 403 });
   }
   const path = req.nextUrl.pathname;
-  // API routes answer 401 themselves; the sign-in page stays public.
-  if (path.startsWith("/api/") || path === "/sign-in") return NextResponse.next();
+  // API routes answer 401 themselves; the sign-in page and invitation links stay public.
+  if (path.startsWith("/api/") || path === "/sign-in" || path.startsWith("/invite/")) return NextResponse.next();
   return signedIn(req, event);
 }
 

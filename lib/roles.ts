@@ -32,17 +32,36 @@ export const permissions = [
   "files:read",
   "files:write",
   "files:share",
+  /** The firm's own notes on a scheme, which never reach a client. */
+  "notes:read",
+  /** Invite committee members by e-mail, re-send or withdraw invitations, remove members of the committee. */
+  "committee:manage",
+  /** Comment on a shared scheme (optionally on one stop): the firm and the project's committee read them. */
+  "comments:write",
+  /** A committee member's own preferred scheme. */
+  "preferences:record",
+  /** Who on the committee prefers which scheme. */
+  "preferences:read",
+  /** The outbox: every message the app queued, with its text, links and attachments. */
+  "mail:read",
 ] as const;
 export type Permission = (typeof permissions)[number];
 
 const grants: Record<Role, readonly Permission[]> = {
-  admin: permissions,
-  designer: ["projects:create", "projects:read", "projects:edit", "schemes:edit", "schemes:read", "revisions:read", "estimate:read", "money:read", "notes:write", "files:read", "files:write", "files:share"],
-  estimator: ["projects:read", "schemes:read", "revisions:read", "estimate:read", "money:read", "rates:manage", "quotes:issue", "notes:write", "files:read", "files:write", "files:share"],
+  // A preference is a committee member's own; the administrator manages, but does not sit on a committee.
+  admin: permissions.filter((p) => p !== "preferences:record"),
+  designer: [
+    "projects:create", "projects:read", "projects:edit", "schemes:edit", "schemes:read", "revisions:read", "estimate:read", "money:read",
+    "notes:write", "notes:read", "committee:manage", "comments:write", "preferences:read", "files:read", "files:write", "files:share",
+  ],
+  estimator: [
+    "projects:read", "schemes:read", "revisions:read", "estimate:read", "money:read", "rates:manage", "quotes:issue",
+    "notes:write", "notes:read", "committee:manage", "comments:write", "preferences:read", "files:read", "files:write", "files:share",
+  ],
   // The workshop makes much of the survey on site: it adds photos, but sharing is for the people who deal with the committee.
-  workshop: ["projects:read", "schemes:read", "revisions:read", "estimate:read", "notes:write", "files:read", "files:write"],
-  // Clients see only shared schemes and shared files of their own projects, and never rates or margins.
-  client: ["projects:read", "schemes:read", "files:read"],
+  workshop: ["projects:read", "schemes:read", "revisions:read", "estimate:read", "notes:write", "notes:read", "preferences:read", "files:read", "files:write"],
+  // Clients see only shared schemes and shared files of their own projects, and never rates, hours or margins.
+  client: ["projects:read", "schemes:read", "files:read", "comments:write", "preferences:record"],
 };
 
 export function can(role: Role, permission: Permission): boolean {

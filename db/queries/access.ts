@@ -31,7 +31,10 @@ export async function loadSchemeFor({ user, schemeId, tx = db, lock = false }: {
   const query = tx.select().from(schemes).where(eq(schemes.id, schemeId)).limit(1);
   const [scheme] = lock ? await query.for("update") : await query;
   if (!scheme) throw new AppError("not_found", "No such scheme.");
-  const project = await loadProjectFor({ user, projectId: scheme.projectId, tx });
+  // A scheme of someone else's project answers exactly as one that does not exist.
+  const project = await loadProjectFor({ user, projectId: scheme.projectId, tx }).catch((err: unknown) => {
+    throw err instanceof AppError && err.code === "not_found" ? new AppError("not_found", "No such scheme.") : err;
+  });
   if (user.role === "client" && !scheme.sharedWithClient) throw new AppError("not_found", "No such scheme.");
   return { scheme, project };
 }

@@ -7,6 +7,7 @@ import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
 import { schemeDocumentSchema, type SchemeDocument, type SchemeRead, type SchemeStatus } from "@/lib/spec/document";
 import { checkDocument } from "@/lib/spec/validate";
+import { sendSchemeShared } from "@/lib/server/notify";
 import { assertOpen, loadProjectFor, loadSchemeFor } from "./access";
 
 async function toRead(tx: Store, scheme: Scheme, project: Project): Promise<SchemeRead> {
@@ -99,12 +100,14 @@ export async function saveScheme({ user, schemeId, version, document, note = "" 
 }
 
 export async function updateSchemeMeta({ user, schemeId, status, sharedWithClient }: { user: SessionUser; schemeId: string; status?: SchemeStatus; sharedWithClient?: boolean }): Promise<SchemeRead> {
-  const { project } = await loadSchemeFor({ user, schemeId });
+  const { scheme, project } = await loadSchemeFor({ user, schemeId });
   const [updated] = await db
     .update(schemes)
     .set({ ...(status ? { status } : {}), ...(sharedWithClient !== undefined ? { sharedWithClient } : {}), updatedAt: new Date() })
     .where(eq(schemes.id, schemeId))
     .returning();
+  // The committee hears of a scheme when it is first opened to them.
+  if (sharedWithClient && !scheme.sharedWithClient) await sendSchemeShared({ project, schemeId, schemeName: updated!.name, sharedBy: user.name });
   return toRead(db, updated!, project);
 }
 

@@ -83,6 +83,25 @@ export function route<S extends z.ZodType | undefined = undefined, P = Record<st
   };
 }
 
+/**
+ * For the few handlers a signed-out visitor may call (accepting an invitation): the same origin and
+ * body checks, zod parsing and typed errors as route(), without a session.
+ */
+export function publicRoute<S extends z.ZodType>(opts: { body: S }, fn: (args: { body: z.output<S>; req: Request }) => Promise<unknown>) {
+  return async (req: Request): Promise<Response> => {
+    try {
+      assertSameOrigin(req, appOrigin());
+      assertJsonBody(req);
+      const parsed = opts.body.safeParse(await readJson(req));
+      if (!parsed.success) throw invalid(parsed.error);
+      const result = await fn({ body: parsed.data, req });
+      return result instanceof Response ? result : Response.json(result ?? { ok: true });
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}
+
 export type ActionResult<T> = { ok: true; data: T } | { ok: false; code: string; message: string; fields?: FieldErrors };
 
 /** The same wrapper for server actions: they are public endpoints too. */
