@@ -6,22 +6,7 @@ import { AppError } from "@/lib/server/errors";
 import { isUuid } from "@/db/queries/access";
 import { enqueueMail } from "./queue";
 
-export type OutboxAttachment = { id: string; filename: string; contentType: string; sizeBytes: number };
-export type OutboxMessage = {
-  id: string;
-  kind: string;
-  to: string[];
-  subject: string;
-  text: string;
-  links: { label: string; url: string }[];
-  status: "queued" | "sent" | "failed";
-  attempts: number;
-  lastError: string | null;
-  createdAt: string;
-  lastAttemptAt: string | null;
-  sentAt: string | null;
-  attachments: OutboxAttachment[];
-};
+import type { OutboxMessage } from "./types";
 
 /** The newest messages of the outbox, as the admin's Outgoing mail page lists them. */
 export async function listOutgoingMail({ limit = 200 }: { limit?: number } = {}): Promise<OutboxMessage[]> {

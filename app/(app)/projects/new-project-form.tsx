@@ -1,11 +1,11 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { api, ApiError } from "@/components/spec/api";
+import { ApiError } from "@/components/spec/api";
+import { useCreateProject } from "@/lib/query/hooks";
 import { applyServerErrors } from "@/components/ui/server-errors";
 import { projectInputSchema } from "@/lib/spec/projects";
 import { ProjectFields, projectFieldNames, type ProjectFormValues } from "./project-fields";
@@ -16,7 +16,7 @@ const blank: ProjectFormValues = {
 
 export function NewProjectForm() {
   const router = useRouter();
-  const queryClient = useQueryClient();
+  const create = useCreateProject();
   const [notice, setNotice] = useState<string | null>(null);
   const form = useForm<ProjectFormValues, unknown, z.output<typeof projectInputSchema>>({
     resolver: zodResolver(projectInputSchema),
@@ -26,8 +26,7 @@ export function NewProjectForm() {
   const onSubmit = form.handleSubmit(async (values) => {
     setNotice(null);
     try {
-      const { project } = await api.createProject(values);
-      await queryClient.invalidateQueries({ queryKey: ["projects"] });
+      const { project } = await create.mutateAsync(values);
       router.push(`/projects/${project.id}`);
     } catch (err) {
       if (err instanceof ApiError) {

@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
 import { listProjectsForUser } from "@/db/queries/projects";
+import { keys } from "@/lib/query/keys";
+import { Hydrate, prefetch } from "@/lib/query/server";
 import { can } from "@/lib/roles";
 import { requirePageUser } from "@/lib/server/guard";
 import { NewProjectForm } from "./new-project-form";
@@ -9,7 +11,7 @@ export const metadata: Metadata = { title: "Projects" };
 
 export default async function ProjectsPage() {
   const user = await requirePageUser("projects:read", "/projects");
-  const projects = await listProjectsForUser({ user, includeArchived: false });
+  await prefetch(keys.projects.list(false), () => listProjectsForUser({ user, includeArchived: false }));
   const mayCreate = can(user.role, "projects:create");
   return (
     <div className={mayCreate ? "grid gap-6 xl:grid-cols-[1fr_24rem]" : ""}>
@@ -18,7 +20,9 @@ export default async function ProjectsPage() {
           <h1 className="text-2xl font-semibold">Projects</h1>
           <p className="text-sm text-ink-soft">Each project is one instrument job for one client, with its alternative schemes.</p>
         </div>
-        <ProjectsTable initialProjects={projects} />
+        <Hydrate>
+          <ProjectsTable />
+        </Hydrate>
       </section>
       {mayCreate && (
         <section className="panel self-start p-4">

@@ -1,8 +1,7 @@
 "use client";
-import { useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useMemo, useState } from "react";
-import { api } from "@/components/spec/api";
+import { useProjects } from "@/lib/query/hooks";
 import { formatDate } from "@/components/spec/format";
 import { projectStatusLabels, projectStatuses, type ProjectStatus, type ProjectSummary } from "@/lib/spec/projects";
 
@@ -25,17 +24,13 @@ function compare(a: ProjectSummary, b: ProjectSummary, key: SortKey): number {
   return String(x).localeCompare(String(y), "en-GB", { sensitivity: "base" });
 }
 
-export function ProjectsTable({ initialProjects }: { initialProjects: ProjectSummary[] }) {
+export function ProjectsTable() {
   const [archived, setArchived] = useState(false);
   const [search, setSearch] = useState("");
   const [status, setStatus] = useState<ProjectStatus | "">("");
   const [sort, setSort] = useState<{ key: SortKey; dir: 1 | -1 }>({ key: "updatedAt", dir: -1 });
 
-  const query = useQuery({
-    queryKey: ["projects", { archived }],
-    queryFn: async () => (await api.listProjects(archived)).projects,
-    initialData: archived ? undefined : initialProjects,
-  });
+  const query = useProjects(archived);
 
   const rows = useMemo(() => {
     const q = search.trim().toLowerCase();

@@ -1,32 +1,22 @@
 "use client";
-import { useRouter } from "next/navigation";
-import { useState, useTransition } from "react";
-import { api, ApiError } from "@/components/spec/api";
+import { useState } from "react";
+import { ApiError } from "@/components/spec/api";
+import { useAddMember, useRemoveMember } from "@/lib/query/hooks";
 import { roleLabels, type Role } from "@/lib/roles";
 import type { ProjectMember } from "@/lib/spec/projects";
 
+/** The firm's people on the project (the committee has its own panel). */
 export function MembersPanel({ projectId, members, mayEdit, selfId }: { projectId: string; members: ProjectMember[]; mayEdit: boolean; selfId: string }) {
-  const router = useRouter();
   const [email, setEmail] = useState("");
   const [error, setError] = useState<string | null>(null);
-  const [pending, startTransition] = useTransition();
-
-  function run(fn: () => Promise<unknown>, after?: () => void) {
-    setError(null);
-    startTransition(async () => {
-      try {
-        await fn();
-        after?.();
-        router.refresh();
-      } catch (err) {
-        setError(err instanceof ApiError ? (err.fields?.email?.join(" ") ?? err.message) : "That did not work.");
-      }
-    });
-  }
+  const add = useAddMember(projectId);
+  const remove = useRemoveMember(projectId);
+  const pending = add.isPending || remove.isPending;
+  const onError = (err: unknown) => setError(err instanceof ApiError ? (err.fields?.email?.join(" ") ?? err.message) : "That did not work.");
 
   return (
     <section className="panel self-start" aria-labelledby="members-heading">
-      <h2 id="members-heading" className="border-b border-tin-rule px-4 py-3 text-xl font-semibold">Members</h2>
+      <h2 id="members-heading" className="border-b border-tin-rule px-4 py-3 text-xl font-semibold">The firm on this project</h2>
       <ul className="divide-y divide-tin-rule text-sm" data-testid="members">
         {members.map((m) => (
           <li key={m.id} className="flex items-center gap-3 px-4 py-2">
@@ -35,7 +25,7 @@ export function MembersPanel({ projectId, members, mayEdit, selfId }: { projectI
               <span className="block truncate text-xs text-tin">{m.email} · {roleLabels[m.role as Role] ?? m.role}</span>
             </span>
             {mayEdit && m.id !== selfId && (
-              <button type="button" className="btn py-1 text-xs" disabled={pending} aria-label={`Remove ${m.name} from the project`} onClick={() => run(() => api.removeMember(projectId, m.id))}>
+              <button type="button" className="btn py-1 text-xs" disabled={pending} aria-label={`Remove ${m.name} from the project`} onClick={() => { setError(null); remove.mutate(m.id, { onError }); }}>
                 Remove
               </button>
             )}
@@ -51,7 +41,8 @@ export function MembersPanel({ projectId, members, mayEdit, selfId }: { projectI
           onSubmit={(e) => {
             e.preventDefault();
             if (!email.trim()) return setError("Give the member's e-mail.");
-            run(() => api.addMember(projectId, email.trim()), () => setEmail(""));
+            setError(null);
+            add.mutate(email.trim(), { onSuccess: () => setEmail(""), onError });
           }}
         >
           <label className="label" htmlFor="member-email">Add by e-mail</label>
@@ -60,7 +51,7 @@ export function MembersPanel({ projectId, members, mayEdit, selfId }: { projectI
             <button type="submit" className="btn-primary" disabled={pending}>Add</button>
           </div>
           {error && <p role="alert" className="field-error"><span aria-hidden="true">✕ </span>{error}</p>}
-          <p className="mt-2 text-xs text-tin">Committee members must first have an account; they see only the schemes shared with them.</p>
+          <p className="mt-2 text-xs text-tin">For the firm&apos;s people with an account. Invite committee members by e-mail in the Committee panel.</p>
         </form>
       )}
     </section>

@@ -1,10 +1,10 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { api, ApiError } from "@/components/spec/api";
+import { ApiError } from "@/components/spec/api";
+import { useUpdateProject } from "@/lib/query/hooks";
 import { StateMark } from "@/components/ui/state-mark";
 import { applyServerErrors } from "@/components/ui/server-errors";
 import { projectInputSchema, type ProjectRead } from "@/lib/spec/projects";
@@ -18,7 +18,7 @@ function valuesOf(p: ProjectRead): ProjectFormValues {
 }
 
 export function ProjectDetailsForm({ project, readOnly }: { project: ProjectRead; readOnly: boolean }) {
-  const router = useRouter();
+  const update = useUpdateProject(project.id);
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
   const form = useForm<ProjectFormValues, unknown, z.output<typeof projectInputSchema>>({
     resolver: zodResolver(projectInputSchema),
@@ -28,10 +28,9 @@ export function ProjectDetailsForm({ project, readOnly }: { project: ProjectRead
   const onSubmit = form.handleSubmit(async (values) => {
     setNotice(null);
     try {
-      const { project: saved } = await api.updateProject(project.id, values);
+      const { project: saved } = await update.mutateAsync(values);
       form.reset(valuesOf(saved));
       setNotice({ ok: true, text: "Details saved." });
-      router.refresh();
     } catch (err) {
       if (err instanceof ApiError) {
         const rest = applyServerErrors(form.setError, err.fields, projectFieldNames);

@@ -1,8 +1,9 @@
 "use client";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useState, useTransition } from "react";
-import { api, ApiError } from "@/components/spec/api";
+import { useState } from "react";
+import { ApiError, errorText } from "@/components/spec/api";
+import { useCreateScheme, useDuplicateScheme, usePatchScheme } from "@/lib/query/hooks";
 import { formatDateTime } from "@/components/spec/format";
 import { schemeStatuses, type SchemeStatus } from "@/lib/spec/document";
 import type { SchemeSummary } from "@/lib/spec/projects";
@@ -20,7 +21,8 @@ function NewSchemeForm({ projectId }: { projectId: string }) {
   const [name, setName] = useState("");
   const [description, setDescription] = useState("");
   const [error, setError] = useState<string | null>(null);
-  const [pending, startTransition] = useTransition();
+  const create = useCreateScheme(projectId);
+  const pending = create.isPending;
   return (
     <form
       aria-label="New scheme"
@@ -30,14 +32,13 @@ function NewSchemeForm({ projectId }: { projectId: string }) {
         e.preventDefault();
         if (!name.trim()) return setError("Give the scheme a name.");
         setError(null);
-        startTransition(async () => {
-          try {
-            const { scheme } = await api.createScheme(projectId, { name: name.trim(), description });
-            router.push(`/projects/${projectId}/schemes/${scheme.id}`);
-          } catch (err) {
-            setError(err instanceof ApiError ? (err.fields?.name?.join(" ") ?? err.message) : "The scheme could not be created.");
-          }
-        });
+        create.mutate(
+          { name: name.trim(), description },
+          {
+            onSuccess: ({ scheme }) => router.push(`/projects/${projectId}/schemes/${scheme.id}`),
+            onError: (err) => setError(err instanceof ApiError ? (err.fields?.name?.join(" ") ?? err.message) : "The scheme could not be created."),
+          },
+        );
       }}
     >
       <div>
@@ -59,18 +60,14 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
   const [copying, setCopying] = useState(false);
   const [copyName, setCopyName] = useState(`${scheme.name} (copy)`);
   const [error, setError] = useState<string | null>(null);
-  const [pending, startTransition] = useTransition();
-
-  function run(fn: () => Promise<void>) {
+  const duplicate = useDuplicateScheme(projectId);
+  const patch = usePatchScheme(projectId);
+  const pending = duplicate.isPending || patch.isPending;
+  const onError = (err: unknown) => setError(errorText(err));
+  const change = (body: { status?: SchemeStatus; sharedWithClient?: boolean }) => {
     setError(null);
-    startTransition(async () => {
-      try {
-        await fn();
-      } catch (err) {
-        setError(err instanceof ApiError ? err.message : "That did not work.");
-      }
-    });
-  }
+    patch.mutate({ schemeId: scheme.id, ...body }, { onError });
+  };
 
   return (
     <tr className="border-t border-tin-rule align-top" data-testid={`scheme-${scheme.name}`}>
@@ -87,10 +84,8 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
             onSubmit={(e) => {
               e.preventDefault();
               if (!copyName.trim()) return setError("Give the copy a name.");
-              run(async () => {
-                const { scheme: copy } = await api.duplicateScheme(scheme.id, copyName.trim());
-                router.push(`/projects/${projectId}/schemes/${copy.id}`);
-              });
+              setError(null);
+              duplicate.mutate({ schemeId: scheme.id, name: copyName.trim() }, { onSuccess: ({ scheme: copy }) => router.push(`/projects/${projectId}/schemes/${copy.id}`), onError });
             }}
           >
             <label className="sr-only" htmlFor={`copy-${scheme.id}`}>Name of the copy</label>
@@ -111,7 +106,7 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
             aria-label={`Status of ${scheme.name}`}
             value={scheme.status}
             disabled={pending}
-            onChange={(e) => run(async () => { await api.patchScheme(scheme.id, { status: e.target.value as SchemeStatus }); router.refresh(); })}
+            onChange={(e) => change({ status: e.target.value as SchemeStatus })}
           >
             {schemeStatuses.map((s) => <option key={s} value={s}>{schemeStatusLabels[s]}</option>)}
           </select>
@@ -127,7 +122,7 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
               className="accent-brass"
               checked={scheme.sharedWithClient}
               disabled={pending}
-              onChange={(e) => run(async () => { await api.patchScheme(scheme.id, { sharedWithClient: e.target.checked }); router.refresh(); })}
+              onChange={(e) => change({ sharedWithClient: e.target.checked })}
             />
             {scheme.sharedWithClient ? "Shared" : "Not shared"}
           </label>
@@ -146,11 +141,16 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
   );
 }
 
-export function SchemesList({ projectId, schemes, mayEdit }: { projectId: string; schemes: SchemeSummary[]; mayEdit: boolean }) {
+export function SchemesList({ projectId, schemes, mayEdit, clientView }: { projectId: string; schemes: SchemeSummary[]; mayEdit: boolean; clientView: boolean }) {
   const names = new Map(schemes.map((s) => [s.id, s.name]));
   return (
     <section className="panel" aria-labelledby="schemes-heading">
-      <h2 id="schemes-heading" className="border-b border-tin-rule px-4 py-3 text-xl font-semibold">Schemes</h2>
+      <div className="flex flex-wrap items-center gap-3 border-b border-tin-rule px-4 py-3">
+        <h2 id="schemes-heading" className="flex-1 text-xl font-semibold">{clientView ? "Schemes shared with the committee" : "Schemes"}</h2>
+        {schemes.length >= 2 && (
+          <Link className="btn-primary" href={`/projects/${projectId}/compare`} data-testid="compare-link">Compare schemes</Link>
+        )}
+      </div>
       <div className="overflow-x-auto">
         <table className="w-full text-sm" data-testid="schemes-table">
           <thead className="text-left text-xs uppercase tracking-wide text-tin">

@@ -1,0 +1,24 @@
+/**
+ * The one query-key factory: every cached read of the browser is named here, so a mutation can say
+ * exactly what it makes stale. Hierarchical: invalidating `keys.projects.all` refetches every project read.
+ */
+export const keys = {
+  projects: {
+    all: ["projects"] as const,
+    list: (archived: boolean) => ["projects", "list", { archived }] as const,
+    detail: (projectId: string) => ["projects", "detail", projectId] as const,
+    invitations: (projectId: string) => ["projects", "detail", projectId, "invitations"] as const,
+    preferences: (projectId: string) => ["projects", "detail", projectId, "preferences"] as const,
+    ownPreference: (projectId: string) => ["projects", "detail", projectId, "own-preference"] as const,
+    comparison: (projectId: string, schemeIds: readonly string[]) => ["projects", "detail", projectId, "comparison", schemeIds.join(",")] as const,
+    changeCosts: (projectId: string, schemeIds: readonly string[]) => ["projects", "detail", projectId, "change-costs", schemeIds.join(",")] as const,
+  },
+  schemes: {
+    all: ["schemes"] as const,
+    detail: (schemeId: string) => ["schemes", schemeId] as const,
+    revisions: (schemeId: string) => ["schemes", schemeId, "revisions"] as const,
+    comments: (schemeId: string) => ["schemes", schemeId, "comments"] as const,
+    notes: (schemeId: string) => ["schemes", schemeId, "notes"] as const,
+  },
+  mail: { outbox: ["mail", "outbox"] as const },
+} as const;
