@@ -11,6 +11,7 @@ export default async function SignedInLayout({ children }: { children: ReactNode
     { href: "/", label: "Home", show: true },
     { href: "/projects", label: "Projects", show: can(user.role, "projects:read") },
     { href: "/admin/users", label: "Users", show: can(user.role, "users:manage") },
+    { href: "/admin/mail", label: "Outgoing mail", show: can(user.role, "mail:read") },
   ].filter((l) => l.show);
   return (
     <div className="min-h-screen">

@@ -158,3 +158,16 @@ export function couplerName(c: { from: string; to: string; octave: -1 | 0 | 1 },
   return c.from === c.to ? `${name(c.from)}${octave || " Unison"}` : `${name(c.from)} to ${name(c.to)}${octave}`;
 }
 
+
+/**
+ * An exact decimal amount as written, to the cent, grouped with thin spaces: never through a float,
+ * so lines shown add up to the total shown. `signed` writes + for a rise (differences).
+ */
+export function formatMoney(amount: string, currency: string, { signed = false }: { signed?: boolean } = {}): string {
+  const negative = amount.startsWith("-");
+  const [whole, cents = "00"] = amount.replace(/^[-+]/, "").split(".");
+  const grouped = whole!.replace(/\B(?=(\d{3})+(?!\d))/g, "\u202f");
+  const zero = /^0*\.?0*$/.test(amount.replace(/^[-+]/, ""));
+  const sign = negative && !zero ? "−" : signed && !zero ? "+" : "";
+  return `${sign}${currency === "EUR" ? "€" : currency === "GBP" ? "£" : `${currency} `}${grouped}.${cents.padEnd(2, "0")}`;
+}
