@@ -15,3 +15,13 @@ export const demoAccounts: ReadonlyArray<{ email: string; name: string; role: Ro
   { email: "workshop@corvinlathe.example", name: "Declan Ferrow", role: "workshop", password: "demo-workshop-pass" },
   { email: "committee@staldric.example", name: "Hilda Orme", role: "client", password: "demo-committee-pass" },
 ];
+
+/**
+ * St Aldric's organ committee (all invented): Hilda Orme above, its secretary, with the rector and
+ * the independent organ adviser. Only Hilda's password is printed; the others sign in the same way.
+ */
+export const demoCommittee: ReadonlyArray<{ email: string; name: string; password: string }> = [
+  { email: "committee@staldric.example", name: "Hilda Orme", password: "demo-committee-pass" },
+  { email: "rector@staldric.example", name: "Revd Piers Anworth", password: "demo-rector-pass" },
+  { email: "adviser@staldric.example", name: "Dr Maud Kestle", password: "demo-adviser-pass" },
+];

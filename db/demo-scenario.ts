@@ -183,3 +183,24 @@ export const demoProjects = [
     shared: [false],
   },
 ];
+
+/**
+ * What St Aldric's committee has said so far (all invented): comments, some on one stop, a firm note,
+ * and two of the three members' preferences. Schemes by index in the project's list; authors by e-mail.
+ */
+export const demoDiscussion = {
+  project: "St Aldric's, Wexmoor — organ rebuild",
+  comments: [
+    { scheme: 0, author: "committee@staldric.example", stopId: null, body: "The PCC likes keeping the 1908 voices. Could the restoration be done in two phases to spread the cost?" },
+    { scheme: 1, author: "adviser@staldric.example", stopId: "gt-mx", body: "A four-rank Mixture will be bright in this building. Would three ranks, breaking at c', sit better with the Open Diapason?" },
+    { scheme: 1, author: "tonal@corvinlathe.example", stopId: "gt-mx", body: "We can make it three ranks; the breaks would follow the Swell Mixture. We will show both on site." },
+    { scheme: 1, author: "rector@staldric.example", stopId: "ped-ow", body: "Where would the Open Wood stand? The north aisle is already tight." },
+  ],
+  notes: [{ scheme: 1, author: "estimates@corvinlathe.example", stopId: "ped-ow", body: "The Pedal basses do not fit the depth: price conveyancing to an offset chest before the next meeting." }],
+  preferences: [
+    { author: "committee@staldric.example", scheme: 0, note: "Keeps what we have, within the appeal's reach." },
+    { author: "adviser@staldric.example", scheme: 1, note: "The Choir and a proper Pedal make it a teaching instrument." },
+  ],
+  /** A fourth person invited but not yet joined: the link is in the Outgoing mail page. */
+  invitation: { email: "treasurer@staldric.example", name: "Owen Pellow" },
+};

@@ -3,10 +3,13 @@ import bcrypt from "bcryptjs";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { and, eq } from "drizzle-orm";
 import { Pool } from "pg";
-import { env } from "../lib/env";
+import { composeMail } from "../lib/mail/compose";
+import { appOrigin, env } from "../lib/env";
+import { INVITATION_DAYS } from "../lib/spec/committee";
 import { schemeDocumentSchema } from "../lib/spec/document";
-import { demoAccounts, demoFirm } from "./demo-accounts";
-import { demoProjects, restoreScheme } from "./demo-scenario";
+import { demoAccounts, demoCommittee, demoFirm } from "./demo-accounts";
+import { demoDiscussion, demoProjects, restoreScheme } from "./demo-scenario";
+import { newToken } from "./invitation-token";
 import { insertScheme, type Store } from "./scheme-store";
 import { parishSurveyFiles } from "./demo-files";
 import { inspectFile } from "../lib/server/file-check";
@@ -23,26 +26,69 @@ async function main() {
       const firm = await tx.select().from(schema.firms).where(eq(schema.firms.name, demoFirm.name)).limit(1);
       if (!firm.length) await tx.insert(schema.firms).values(demoFirm);
 
-      const ids = new Map<string, string>();
-      for (const a of demoAccounts) {
+      const byEmail = new Map<string, string>();
+      const people = [...demoAccounts, ...demoCommittee.map((c) => ({ ...c, role: "client" as const }))];
+      for (const a of people) {
+        if (byEmail.has(a.email)) continue;
         const [existing] = await tx.select({ id: schema.users.id }).from(schema.users).where(eq(schema.users.email, a.email)).limit(1);
         const id = existing?.id ?? (await tx.insert(schema.users).values({ email: a.email, name: a.name, role: a.role, passwordHash: await bcrypt.hash(a.password, 10) }).returning())[0]!.id;
-        ids.set(a.role, id);
+        byEmail.set(a.email, id);
       }
+      const firmIds = demoAccounts.filter((a) => ["designer", "estimator", "workshop"].includes(a.role)).map((a) => byEmail.get(a.email)!);
+      const designerId = byEmail.get(demoAccounts.find((a) => a.role === "designer")!.email)!;
 
       for (const demo of demoProjects) {
         const [existing] = await tx.select({ id: schema.projects.id }).from(schema.projects).where(eq(schema.projects.name, demo.project.name)).limit(1);
         if (existing) continue;
-        const [project] = await tx.insert(schema.projects).values({ ...demo.project, createdById: ids.get("designer") }).returning();
-        // The tonal director and the estimator work on every demo project; the committee member only on St Aldric's.
-        const members = ["designer", "estimator", "workshop", ...(demo.schemes.length ? ["client"] : [])];
-        await tx.insert(schema.projectMembers).values(members.map((r) => ({ projectId: project!.id, userId: ids.get(r)! })));
+        const [project] = await tx.insert(schema.projects).values({ ...demo.project, createdById: designerId }).returning();
+        // The firm's people work on every demo project; the committee sits on St Aldric's only.
+        const committee = demo.project.name === demoDiscussion.project ? demoCommittee.map((c) => byEmail.get(c.email)!) : [];
+        await tx.insert(schema.projectMembers).values([...firmIds, ...committee].map((userId) => ({ projectId: project!.id, userId })));
+        const schemeIds: string[] = [];
         for (const [i, input] of demo.schemes.entries()) {
-          const scheme = await insertScheme(tx, { projectId: project!.id, document: schemeDocumentSchema.parse(input), authorId: ids.get("designer")!, note: "created" });
+          const scheme = await insertScheme(tx, { projectId: project!.id, document: schemeDocumentSchema.parse(input), authorId: designerId, note: "created" });
+          schemeIds.push(scheme.id);
           if (demo.shared[i]) await tx.update(schema.schemes).set({ sharedWithClient: true, status: "proposed" }).where(eq(schema.schemes.id, scheme.id));
         }
+        if (demo.project.name !== demoDiscussion.project) continue;
+
+        // What the committee has said so far, an hour apart so the threads read in order.
+        const at = (hoursAgo: number) => new Date(Date.now() - hoursAgo * 3600_000);
+        const d = demoDiscussion;
+        const label = (scheme: number, stopId: string | null) => {
+          if (!stopId) return null;
+          const doc = schemeDocumentSchema.parse(demo.schemes[scheme]);
+          for (const div of doc.divisions) for (const s of div.stops) if (s.id === stopId) return `${s.name} ${String(s.footage)}′ (${div.name})`;
+          throw new Error(`demo discussion: no stop ${stopId}`);
+        };
+        await tx.insert(schema.schemeComments).values(
+          d.comments.map((c, i) => ({ schemeId: schemeIds[c.scheme]!, stopId: c.stopId, stopLabel: label(c.scheme, c.stopId), authorId: byEmail.get(c.author)!, body: c.body, createdAt: at(48 - i * 5) })),
+        );
+        await tx.insert(schema.schemeNotes).values(
+          d.notes.map((n) => ({ schemeId: schemeIds[n.scheme]!, stopId: n.stopId, stopLabel: label(n.scheme, n.stopId), authorId: byEmail.get(n.author)!, body: n.body, createdAt: at(20) })),
+        );
+        await tx.insert(schema.schemePreferences).values(
+          d.preferences.map((p, i) => ({ projectId: project!.id, userId: byEmail.get(p.author)!, schemeId: schemeIds[p.scheme]!, note: p.note, updatedAt: at(10 - i * 3) })),
+        );
+        // An invitation still open, with its message in the outbox (sent by the app's mail worker once it runs).
+        const { token, tokenHash } = newToken();
+        await tx.insert(schema.invitations).values({
+          projectId: project!.id, email: d.invitation.email, name: d.invitation.name, tokenHash, invitedById: designerId,
+          expiresAt: new Date(Date.now() + INVITATION_DAYS * 24 * 3600_000),
+        });
+        const mail = composeMail({
+          greeting: `Dear ${d.invitation.name},`,
+          paragraphs: [
+            `Tobias Quell of ${demoFirm.name} invites you to the organ committee's pages for ${demo.project.name} in Stopwright.`,
+            `Follow the link to choose a password. It works once, and for ${INVITATION_DAYS} days.`,
+          ],
+          links: [{ label: "Accept the invitation", url: `${appOrigin()}/invite/${token}` }],
+          signature: demoFirm.name,
+        });
+        await tx.insert(schema.outgoingMail).values({ kind: "invitation", to: [d.invitation.email], subject: `Invitation: ${demo.project.name} — organ committee`, ...mail });
       }
-      await seedSurveyFiles(tx, demoProjects[0]!.project.name, ids.get("workshop")!);
+      const workshop = demoAccounts.find((a) => a.role === "workshop")!;
+      await seedSurveyFiles(tx, demoProjects[0]!.project.name, byEmail.get(workshop.email)!);
     });
     console.log("demo data in place");
   } finally {

@@ -5,7 +5,8 @@
  * largest pipe plus clearance. Diameters come from the estimator's per-pipe geometry.
  */
 import { clearanceMm } from "@/lib/estimate";
-import { pipesOfStop, planScheme, type PipeDetail, type Rates, type Scheme } from "@/lib/estimate";
+import { pipesOfStop, planScheme, type PipeDetail, type Scheme } from "@/lib/estimate";
+import type { DrawingRules } from "@/lib/spec/estimate";
 
 export type PlacedPipe = {
   x: number;
@@ -33,7 +34,7 @@ export type ChestPlan = {
 type Piece = { key: number; keyName: string; footprint: number; diameter: number; wood: boolean; prepared: boolean; offset: boolean; channel: number };
 
 /** Lays out the chest of division `divisionId`; null when it has no pipes on a chest. */
-export function layChest(scheme: Scheme, divisionId: string, rates: Rates): ChestPlan | null {
+export function layChest(scheme: Scheme, divisionId: string, rates: DrawingRules): ChestPlan | null {
   const plan = planScheme(scheme);
   if (plan.messages.length) return null;
   const dIndex = plan.divisions.findIndex((d) => d.division.id === divisionId);

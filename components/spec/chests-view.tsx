@@ -1,12 +1,12 @@
 "use client";
 import { useMemo } from "react";
 import { ChestDrawing } from "./chest-drawing";
-import type { Rates } from "@/lib/estimate";
+import type { DrawingRules } from "@/lib/spec/estimate";
 import { layChest } from "./chest-layout";
 import type { Figures } from "./use-figures";
 
 /** A drawing of every division's chest, from the same figures the editor shows. */
-export function ChestsView({ figures, rates }: { figures: Figures; rates: Rates }) {
+export function ChestsView({ figures, rates }: { figures: Figures; rates: DrawingRules }) {
   const drawings = useMemo(() => {
     if (!figures.ok) return null;
     return figures.estimate.divisions.map((d) => ({ d, plan: layChest(figures.scheme, d.id, rates) }));

@@ -17,7 +17,9 @@ import {
 } from "@dnd-kit/core";
 import { horizontalListSortingStrategy, SortableContext } from "@dnd-kit/sortable";
 import { useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from "react";
-import type { DivisionEstimate } from "@/lib/estimate";
+import type { EstimateWithoutMoney } from "@/lib/spec/estimate";
+
+type DivisionEstimate = EstimateWithoutMoney["divisions"][number];
 import type { SchemeDocument } from "@/lib/spec/document";
 import { DivisionColumn } from "./division-column";
 import { findStop, moveDivision, moveStop } from "./doc-ops";

@@ -2,7 +2,9 @@
 import { SortableContext, useSortable, verticalListSortingStrategy } from "@dnd-kit/sortable";
 import { CSS } from "@dnd-kit/utilities";
 import { StateMark } from "@/components/ui/state-mark";
-import type { DivisionEstimate } from "@/lib/estimate";
+import type { EstimateWithoutMoney } from "@/lib/spec/estimate";
+
+type DivisionEstimate = EstimateWithoutMoney["divisions"][number];
 import type { DocDivision } from "@/lib/spec/document";
 import { chestWords, fitState } from "./chest-words";
 import { actionLabels, compassText, formatNumber, windText } from "./format";

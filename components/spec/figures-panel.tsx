@@ -106,7 +106,7 @@ export function FiguresPanel({ figures, showMoney }: { figures: Figures; showMon
         </dl>
         </div>
 
-        {showMoney && (
+        {showMoney && "money" in e && (
           <div>
             <h3 className="label">Money</h3>
           <dl data-testid="money-lines">

@@ -4,7 +4,7 @@ import { useState } from "react";
 import type { SchemeRead } from "@/lib/spec/document";
 import { api, ApiError } from "./api";
 import { formatDateTime } from "./format";
-import { schemeKey } from "./use-scheme-save";
+import { keys } from "@/lib/query/keys";
 
 /** Every saved version of the scheme, newest first; restoring one saves it again as a new version. */
 export function RevisionsPanel({
@@ -27,7 +27,7 @@ export function RevisionsPanel({
   const [confirming, setConfirming] = useState<number | null>(null);
   const [error, setError] = useState<string | null>(null);
   const revisions = useQuery({
-    queryKey: [...schemeKey(schemeId), "revisions"],
+    queryKey: keys.schemes.revisions(schemeId),
     queryFn: async () => (await api.listRevisions(schemeId)).revisions,
   });
   const restore = useMutation({

@@ -9,7 +9,6 @@ import { Dialog } from "@/components/ui/dialog";
 import { StateMark } from "@/components/ui/state-mark";
 import { schemeDocumentSchema, type SchemeDocument, type SchemeRead } from "@/lib/spec/document";
 import { AccessoriesEditor } from "./accessories-editor";
-import type { Rates } from "@/lib/estimate";
 import { ChestsView } from "./chests-view";
 import { DivisionBoard } from "./division-board";
 import { DivisionForm } from "./division-form";
@@ -21,7 +20,7 @@ import { RevisionsPanel } from "./revisions-panel";
 import { SaveStateBadge } from "./save-state";
 import { StopForm } from "./stop-form";
 import type { StopPipes } from "./stop-card";
-import { stopPipesById, useFigures } from "./use-figures";
+import { drawingRulesOf, stopPipesById, useFigures, type FigureSource } from "./use-figures";
 import { clearDraft, readDraft, sameDocument, type UnsavedDraft } from "./unsaved-drafts";
 import { useLeaveGuard } from "./use-leave-guard";
 import { useSchemeSave, type SaveState } from "./use-scheme-save";
@@ -70,7 +69,7 @@ export function SchemeEditor({
   showMoney,
   showFigures,
   canSeeRevisions,
-  rates,
+  figureSource,
 }: {
   initialScheme: SchemeRead;
   projectId: string;
@@ -80,14 +79,14 @@ export function SchemeEditor({
   /** Committee members see the board and the stop list, not the working figures. */
   showFigures: boolean;
   canSeeRevisions: boolean;
-  /** As this user may hold them: prices only with money:read (lib/server/rates.ts). */
-  rates: Rates;
+  /** The firm's rates for those who may hold them, else figures made on the server (lib/server/figures.ts). */
+  figureSource: FigureSource;
 }) {
   const [history, dispatch] = useReducer(historyReducer, initialScheme.document, initHistory);
   const doc = history.present;
   const save = useSchemeSave({ scheme: initialScheme, present: doc, label: history.label, enabled: editable });
   const { saveNow } = save;
-  const figures = useFigures(doc, initialScheme.tuning, rates);
+  const figures = useFigures(doc, initialScheme.tuning, figureSource);
   const [tab, setTab] = useState<Tab>("stops");
   const [editing, setEditing] = useState<Editing>(null);
   const [showRevisions, setShowRevisions] = useState(false);
@@ -325,7 +324,7 @@ export function SchemeEditor({
                   onEditStop={editStop}
                 />
               ))}
-            {tab === "chests" && <ChestsView figures={figures} rates={rates} />}
+            {tab === "chests" && <ChestsView figures={figures} rates={drawingRulesOf(figureSource)} />}
             {tab === "accessories" && (
               <AccessoriesEditor key={save.version + ":" + history.past.length} doc={doc} editable={editable} onApply={(acc) => edit(setAccessories(doc, acc), "Changed couplers and accessories")} />
             )}

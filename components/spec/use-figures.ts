@@ -3,9 +3,18 @@
 import { useMemo } from "react";
 import type { Rates } from "@/lib/estimate";
 import type { SchemeDocument, Tuning } from "@/lib/spec/document";
-import { estimateDocument, type DocumentEstimate } from "@/lib/spec/estimate";
+import { estimateDocument, type DocumentEstimate, type DrawingRules, type EstimateWithoutMoney } from "@/lib/spec/estimate";
 
-export type Figures = (Extract<DocumentEstimate, { ok: true }> & { ms: number }) | Extract<DocumentEstimate, { ok: false }>;
+type Ok = Extract<DocumentEstimate, { ok: true }>;
+/** Live figures carry the whole estimate; figures computed on the server for a reader without money:read carry it without money. */
+export type Figures = ((Ok | (Omit<Ok, "estimate"> & { estimate: EstimateWithoutMoney })) & { ms: number }) | Extract<DocumentEstimate, { ok: false }>;
+
+/**
+ * Where the editor's figures come from: the firm's rates in the browser (for the roles that may hold
+ * them, who also edit), or figures worked out on the server for a read-only reader, with only the
+ * drawing rules beside them, so no norm, crew size or price reaches that browser.
+ */
+export type FigureSource = { kind: "live"; rates: Rates } | { kind: "fixed"; figures: Figures; rules: DrawingRules };
 
 export function computeFigures(doc: SchemeDocument, tuning: Tuning, rates: Rates): Figures {
   const t0 = performance.now();
@@ -18,9 +27,13 @@ export function computeFigures(doc: SchemeDocument, tuning: Tuning, rates: Rates
  * a 150-stop scheme, and edits arrive whole (a drop, a submitted form), never per keystroke, so
  * deferring would only add a frame between a move and its figures.
  */
-export function useFigures(doc: SchemeDocument, tuning: Tuning, rates: Rates): Figures {
+export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSource): Figures {
   const { pitchHz, temperatureC } = tuning;
-  return useMemo(() => computeFigures(doc, { pitchHz, temperatureC }, rates), [doc, pitchHz, temperatureC, rates]);
+  return useMemo(() => (source.kind === "live" ? computeFigures(doc, { pitchHz, temperatureC }, source.rates) : source.figures), [doc, pitchHz, temperatureC, source]);
+}
+
+export function drawingRulesOf(source: FigureSource): DrawingRules {
+  return source.kind === "live" ? source.rates : source.rules;
 }
 
 /** Pipe counts by stop id, for the stop cards. */

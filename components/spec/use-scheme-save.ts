@@ -9,6 +9,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { SchemeDocument, SchemeRead } from "@/lib/spec/document";
+import { keys } from "@/lib/query/keys";
 import { api, ApiError, fieldMessages } from "./api";
 import { clearDraft, writeDraft } from "./unsaved-drafts";
 
@@ -24,8 +25,9 @@ export type SaveState =
   | { kind: "invalid"; messages: string[] }
   | { kind: "error"; message: string };
 
+/** The saved scheme in the query cache (the page prefetches it; the discussion's stop list reads it). */
 export function schemeKey(id: string) {
-  return ["scheme", id] as const;
+  return keys.schemes.detail(id);
 }
 
 export function useSchemeSave({
@@ -96,7 +98,7 @@ export function useSchemeSave({
       notesRef.current = notesRef.current.slice(notes.length);
       setVer(saved.version);
       queryClient.setQueryData(schemeKey(scheme.id), saved);
-      void queryClient.invalidateQueries({ queryKey: [...schemeKey(scheme.id), "revisions"] });
+      void queryClient.invalidateQueries({ queryKey: keys.schemes.revisions(scheme.id) });
       sendingRef.current = null;
       if (presentRef.current !== doc) {
         setState({ kind: "unsaved" });

@@ -1,5 +1,4 @@
 import "server-only";
-import { createHash, randomBytes } from "node:crypto";
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { invitations, projectMembers, projects, schemePreferences, users, type Invitation, type Project } from "@/db/schema";
@@ -10,15 +9,7 @@ import { INVITATION_DAYS, invitationState, type InvitationState, type Invitation
 import { isUuid, loadProjectFor } from "./access";
 import { hashPassword } from "./users";
 
-/** A new link secret: 256 random bits, URL-safe. Only its SHA-256 is stored. */
-function newToken(): { token: string; tokenHash: string } {
-  const token = randomBytes(32).toString("base64url");
-  return { token, tokenHash: hashToken(token) };
-}
-
-export function hashToken(token: string): string {
-  return createHash("sha256").update(token, "utf8").digest("hex");
-}
+import { hashToken, newToken } from "@/db/invitation-token";
 
 const expiry = () => new Date(Date.now() + INVITATION_DAYS * 24 * 3600 * 1000);
 

@@ -32,7 +32,7 @@ export interface RankGeometry {
 }
 
 /** Constants of one rank's pipes. */
-export function rankGeometry(stop: Stop, rates: Rates): RankGeometry {
+export function rankGeometry(stop: Stop, rates: Pick<Rates, "cutUpFraction">): RankGeometry {
   const resonator = resonatorOf(stop.construction);
   const reed = resonator === "reed-full" || resonator === "reed-half";
   return {
@@ -84,7 +84,7 @@ export const MSG_NO_SUCH_STOP = "no stop with this id in the scheme";
  * the pipes they add ("new") and those they share with their rank ("shared"); borrowed stops list
  * the pipes they play ("borrowed"). Throws MSG_NO_SUCH_STOP for an unknown id.
  */
-export function pipesOfStop(scheme: Scheme, stopId: string, rates: Rates, plan: SchemePlan = planScheme(scheme)): PipeDetail[] {
+export function pipesOfStop(scheme: Scheme, stopId: string, rates: Pick<Rates, "cutUpFraction">, plan: SchemePlan = planScheme(scheme)): PipeDetail[] {
   const sp = plan.stops.find((s) => s.stop.id === stopId);
   if (!sp) throw new Error(MSG_NO_SUCH_STOP);
   const root = sp.rootIndex >= 0 ? plan.stops[sp.rootIndex] : sp;

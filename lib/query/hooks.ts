@@ -31,7 +31,7 @@ export const useAddMember = (projectId: string) => useWrite((email: string) => a
 export const useRemoveMember = (projectId: string) => useWrite((userId: string) => api.removeMember(projectId, userId), () => [keys.projects.detail(projectId)]);
 export const useCreateScheme = (projectId: string) =>
   useWrite((input: { name: string; description?: string }) => api.createScheme(projectId, input), () => [keys.projects.all]);
-export const useDuplicateScheme = (projectId: string) =>
+export const useDuplicateScheme = () =>
   useWrite((args: { schemeId: string; name: string }) => api.duplicateScheme(args.schemeId, args.name), () => [keys.projects.all]);
 export const usePatchScheme = (projectId: string) =>
   useWrite(

@@ -1,7 +1,10 @@
 import "server-only";
 import { DEFAULT_RATES } from "@/lib/estimate/demo-rates";
-import { withoutPrices, type Rates } from "@/lib/estimate";
+import type { Rates } from "@/lib/estimate";
+import type { FigureSource } from "@/components/spec/use-figures";
 import { can } from "@/lib/roles";
+import { drawingRules, estimateDocument, estimateWithoutMoney } from "@/lib/spec/estimate";
+import type { SchemeRead } from "@/lib/spec/document";
 import type { SessionUser } from "./guard";
 
 /**
@@ -12,8 +15,16 @@ export function firmRates(): Rates {
   return DEFAULT_RATES;
 }
 
-/** What a user's browser may be given: prices only for roles that may see money. */
-export function ratesForUser(user: SessionUser): Rates {
+/**
+ * Where a scheme page's figures come from. Only roles with money:read (who alone edit schemes) hold
+ * the firm's rates in the browser and recompute as they edit. Everyone else reads a saved scheme, so
+ * its figures are worked out here once and sent without money, and the browser gets only the rules a
+ * chest drawing needs — no labour norm, crew size, price or percentage.
+ */
+export function figureSourceFor(user: SessionUser, scheme: SchemeRead): FigureSource {
   const rates = firmRates();
-  return can(user.role, "money:read") ? rates : withoutPrices(rates);
+  if (can(user.role, "money:read")) return { kind: "live", rates };
+  const r = estimateDocument(scheme.document, scheme.tuning, rates);
+  const figures = r.ok ? { ok: true as const, scheme: r.scheme, estimate: estimateWithoutMoney(r.estimate), ms: 0 } : r;
+  return { kind: "fixed", figures, rules: drawingRules(rates) };
 }

@@ -15,6 +15,19 @@ export function estimateDocument(doc: SchemeDocument, tuning: Tuning, rates: Rat
   return { ok: true, estimate: estimateScheme(parsed.scheme, rates), scheme: parsed.scheme };
 }
 
+/** The rules a chest drawing needs (clearances, board thickness, cut-up): no price, norm or crew among them. */
+export type DrawingRules = Pick<Rates, "chest" | "boardThicknessMm" | "cutUpFraction">;
+export function drawingRules(rates: Rates): DrawingRules {
+  return { chest: rates.chest, boardThicknessMm: rates.boardThicknessMm, cutUpFraction: rates.cutUpFraction };
+}
+
+/** An estimate as a reader without money:read holds it: no money lines, no direct costs, no word of the rates used. */
+export type EstimateWithoutMoney = Omit<ReturnType<typeof withoutMoney>, "ratesProvenance">;
+export function estimateWithoutMoney(e: Estimate): EstimateWithoutMoney {
+  const { ratesProvenance: _r, ...rest } = withoutMoney(e);
+  return rest;
+}
+
 /** What a role without money:read may see: everything but prices, rates and margins. */
 export function withoutMoney(e: Estimate) {
   const { money: _money, ...rest } = e;

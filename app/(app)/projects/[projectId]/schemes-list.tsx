@@ -60,7 +60,7 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
   const [copying, setCopying] = useState(false);
   const [copyName, setCopyName] = useState(`${scheme.name} (copy)`);
   const [error, setError] = useState<string | null>(null);
-  const duplicate = useDuplicateScheme(projectId);
+  const duplicate = useDuplicateScheme();
   const patch = usePatchScheme(projectId);
   const pending = duplicate.isPending || patch.isPending;
   const onError = (err: unknown) => setError(errorText(err));

@@ -16,14 +16,13 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   const { projectId } = await params;
   const { schemes: asked } = await searchParams;
   const user = await requirePageUser("schemes:read", `/projects/${projectId}/compare`);
-  try {
-    const { project, schemes } = await prefetch(keys.projects.detail(projectId), () => getProjectForUser({ user, projectId }));
-    const known = new Set(schemes.map((s) => s.id));
+  const { project, schemes } = await orNotFound(prefetch(keys.projects.detail(projectId), () => getProjectForUser({ user, projectId })));
+  const known = new Set(schemes.map((s) => s.id));
     // Schemes named in the address that this reader may see, in that order; else the first two.
-    let chosen = [...new Set((asked ?? "").split(",").filter((id) => known.has(id)))].slice(0, MAX_COMPARED);
-    if (chosen.length < MIN_COMPARED) chosen = schemes.slice(0, MIN_COMPARED).map((s) => s.id);
-    if (chosen.length >= MIN_COMPARED) await prefetch(keys.projects.comparison(projectId, chosen), () => getComparisonForUser({ user, projectId, schemeIds: chosen }));
-    return (
+  let chosen = [...new Set((asked ?? "").split(",").filter((id) => known.has(id)))].slice(0, MAX_COMPARED);
+  if (chosen.length < MIN_COMPARED) chosen = schemes.slice(0, MIN_COMPARED).map((s) => s.id);
+  if (chosen.length >= MIN_COMPARED) await orNotFound(prefetch(keys.projects.comparison(projectId, chosen), () => getComparisonForUser({ user, projectId, schemeIds: chosen })));
+  return (
       <div className="space-y-4">
         <div>
           <nav aria-label="Breadcrumb" className="text-xs text-tin print:hidden">
@@ -41,7 +40,12 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
           </Hydrate>
         )}
       </div>
-    );
+  );
+}
+
+async function orNotFound<T>(p: Promise<T>): Promise<T> {
+  try {
+    return await p;
   } catch (err) {
     if (err instanceof AppError && (err.code === "not_found" || err.code === "forbidden")) notFound();
     throw err;

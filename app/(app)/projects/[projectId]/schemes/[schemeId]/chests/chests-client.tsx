@@ -1,10 +1,9 @@
 "use client";
 import { ChestsView } from "@/components/spec/chests-view";
-import { useFigures } from "@/components/spec/use-figures";
-import type { Rates } from "@/lib/estimate";
+import { drawingRulesOf, useFigures, type FigureSource } from "@/components/spec/use-figures";
 import type { SchemeDocument, Tuning } from "@/lib/spec/document";
 
-export function ChestsClient({ document, tuning, rates }: { document: SchemeDocument; tuning: Tuning; rates: Rates }) {
-  const figures = useFigures(document, tuning, rates);
-  return <ChestsView figures={figures} rates={rates} />;
+export function ChestsClient({ document, tuning, source }: { document: SchemeDocument; tuning: Tuning; source: FigureSource }) {
+  const figures = useFigures(document, tuning, source);
+  return <ChestsView figures={figures} rates={drawingRulesOf(source)} />;
 }

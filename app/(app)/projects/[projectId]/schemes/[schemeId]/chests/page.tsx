@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { redirect } from "next/navigation";
 import { requirePageUser } from "@/lib/server/guard";
-import { ratesForUser } from "@/lib/server/rates";
+import { figureSourceFor } from "@/lib/server/rates";
 import { loadSchemePage } from "../load";
 import { ChestsClient } from "./chests-client";
 
@@ -11,13 +12,15 @@ export default async function ChestsPage({ params }: { params: Promise<{ project
   const { projectId, schemeId } = await params;
   const user = await requirePageUser("schemes:read", `/projects/${projectId}/schemes/${schemeId}/chests`);
   const { scheme } = await loadSchemePage(user, projectId, schemeId);
+  // The committee reads the scheme's own page, which says whether each chest fits.
+  if (user.role === "client") redirect(`/projects/${projectId}/schemes/${schemeId}`);
   return (
     <div className="space-y-4">
       <div className="flex items-center gap-3 print:hidden">
         <Link href={`/projects/${projectId}/schemes/${schemeId}`} className="btn">← Back to the editor</Link>
         <h1 className="text-2xl font-semibold">Chests of {scheme.document.name}</h1>
       </div>
-      <ChestsClient document={scheme.document} tuning={scheme.tuning} rates={ratesForUser(user)} />
+      <ChestsClient document={scheme.document} tuning={scheme.tuning} source={figureSourceFor(user, scheme)} />
     </div>
   );
 }

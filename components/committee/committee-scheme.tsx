@@ -1,0 +1,66 @@
+import Link from "next/link";
+import { formatDate, formatNumber } from "@/components/spec/format";
+import { StopList } from "@/components/spec/stop-list";
+import { StateMark } from "@/components/ui/state-mark";
+import type { SchemeRead } from "@/lib/spec/document";
+
+/** The figures the firm shares with its client's committee: counts and weeks, never hours, rates or money. */
+export type HeadlineFigures = {
+  stops: number;
+  ranks: number;
+  pipes: { total: number; new: number; reused: number; restored: number };
+  weeks: number;
+  chests: { name: string; fits: boolean | null }[];
+};
+
+/** A shared scheme as the committee reads it: headline figures, the stop list, and whether each chest fits its case. */
+export function CommitteeScheme({ scheme, projectName, clientName, figures }: { scheme: SchemeRead; projectName: string; clientName: string; figures: HeadlineFigures | null }) {
+  const doc = scheme.document;
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-end gap-3 print:hidden">
+        <div className="min-w-0 flex-1">
+          <nav aria-label="Breadcrumb" className="text-xs text-tin">
+            <Link href="/projects" className="hover:text-ink">Projects</Link> <span aria-hidden="true">/</span>{" "}
+            <Link href={`/projects/${scheme.projectId}`} className="hover:text-ink">{projectName}</Link> <span aria-hidden="true">/</span>
+          </nav>
+          <h1 className="text-2xl font-semibold" data-testid="scheme-name">{doc.name}</h1>
+        </div>
+        <Link className="btn-primary" href={`/projects/${scheme.projectId}/compare`}>Compare schemes</Link>
+        <Link className="btn" href={`/projects/${scheme.projectId}`}>Record your preference</Link>
+      </div>
+      {figures && (
+        <section className="panel px-4 py-3" aria-labelledby="headline-heading" data-testid="headline-figures">
+          <h2 id="headline-heading" className="sr-only">In figures</h2>
+          <dl className="grid grid-cols-2 gap-3 text-sm sm:grid-cols-4">
+            <div><dt className="text-xs text-tin">Stops</dt><dd className="num text-xl font-semibold">{formatNumber(figures.stops)}</dd></div>
+            <div><dt className="text-xs text-tin">Ranks</dt><dd className="num text-xl font-semibold">{formatNumber(figures.ranks)}</dd></div>
+            <div>
+              <dt className="text-xs text-tin">Pipes</dt>
+              <dd className="num text-xl font-semibold">{formatNumber(figures.pipes.total)}</dd>
+              <dd className="text-xs text-ink-soft">{formatNumber(figures.pipes.new)} new · {formatNumber(figures.pipes.restored)} restored · {formatNumber(figures.pipes.reused)} reused</dd>
+            </div>
+            <div><dt className="text-xs text-tin">Programme</dt><dd className="num text-xl font-semibold">{formatNumber(figures.weeks, 1)} weeks</dd></div>
+          </dl>
+          <ul className="mt-3 flex flex-wrap gap-x-4 gap-y-1 text-xs" aria-label="Chest space">
+            {figures.chests.map((c) => (
+              <li key={c.name} className={`flex items-center gap-1 ${c.fits === false ? "font-semibold text-clash" : c.fits ? "text-fit" : "text-tin"}`}>
+                <StateMark kind={c.fits === null ? "unknown" : c.fits ? "fit" : "clash"} />
+                {c.name}: {c.fits === null ? "no space given" : c.fits ? "fits the case" : "does not fit the case as drawn"}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
+      <article className="bg-paper-card px-6 py-6 shadow-sm print:bg-white print:p-0 print:shadow-none">
+        <header className="mb-6 border-b border-ink pb-3 text-center font-serif">
+          <p className="text-sm uppercase tracking-[0.2em] text-ink-soft">{clientName}</p>
+          <h2 className="mt-1 text-3xl font-semibold">{doc.name}</h2>
+          {doc.description && <p className="mx-auto mt-1 max-w-2xl text-sm italic text-ink-soft">{doc.description}</p>}
+          <p className="mt-1 text-xs text-tin">{projectName} · version {scheme.version} · {formatDate(scheme.updatedAt)}</p>
+        </header>
+        <StopList doc={doc} />
+      </article>
+    </div>
+  );
+}
