@@ -168,7 +168,7 @@ function Tables({ view, projectId, chosen }: { view: ComparisonView; projectId: 
           </section>
         )}
         {view.hours && (
-          <section className="panel p-4 lg:col-span-2">
+          <section className="panel p-4">
             <StackedBars
               title="Hours by department"
               testId="chart-hours"

@@ -9,8 +9,8 @@ import { Group } from "@visx/group";
 import { scaleBand, scaleLinear } from "@visx/scale";
 import { Bar } from "@visx/shape";
 
-/** The palette in Stopwright's chart order: ink, brass, tin, oak, fit, then caution. */
-export const CHART_COLOURS = ["#1d2433", "#b0852f", "#8a929c", "#7a5230", "#2f6b4f", "#b7791f"] as const;
+/** The palette in Stopwright's chart order: ink, brass, tin, oak, fit, caution, then lighter tints of the same for longer series. */
+export const CHART_COLOURS = ["#1d2433", "#b0852f", "#8a929c", "#7a5230", "#2f6b4f", "#b7791f", "#5a6478", "#d9b873", "#c9ced4", "#b08a66", "#7fae96"] as const;
 
 export type Series = { key: string; label: string };
 export type StackRow = { label: string; values: Record<string, number> };

@@ -202,7 +202,8 @@ function withOneChange(doc: SchemeDocument, other: SchemeDocument, stopId: strin
   const divisions = doc.divisions.map((d) => ({ ...d, stops: d.stops.filter((s) => s.id !== stopId) }));
   if (theirs) {
     const home = divisions.find((d) => d.id === theirs.d.id);
-    if (!home) return { ...doc, divisions: [] };
+    // A stop of a division the first scheme lacks comes with that division, holding this stop only.
+    if (!home) return { ...doc, divisions: [...divisions, { ...theirs.d, stops: [theirs.s] }] };
     const i = doc.divisions.find((d) => d.id === home.id)?.stops.findIndex((s) => s.id === stopId) ?? -1;
     home.stops.splice(i >= 0 ? i : home.stops.length, 0, theirs.s);
   }

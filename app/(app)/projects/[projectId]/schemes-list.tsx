@@ -102,7 +102,7 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
       <td className="px-4 py-2">
         {mayEdit ? (
           <select
-            className="field py-1"
+            className="field min-w-28 py-1"
             aria-label={`Status of ${scheme.name}`}
             value={scheme.status}
             disabled={pending}
