@@ -323,13 +323,18 @@ test.describe("read-only roles", () => {
     const schemes = page.getByTestId("schemes-table");
     await expect(schemes.getByTestId("scheme-Shared scheme")).toBeVisible();
     await expect(schemes.getByTestId("scheme-Unshared scheme")).toHaveCount(0);
-    await expect(page.getByTestId("members")).toContainText(client.email);
+    // The committee sees who is on the project, by name only.
+    await expect(page.getByTestId("people")).toContainText("Test client");
+    await expect(page.getByTestId("people")).not.toContainText("@");
 
     await schemes.getByRole("link", { name: "Shared scheme" }).click();
     await expect(page).toHaveURL(new RegExp(`${schemePath(projectId, schemeId)}$`));
-    await expectNoEditing(page);
-    // The committee sees the stops and their pipes, not the firm's working figures, money or history.
-    await expect(stopCard(page, "Open Diapason")).toContainText("61 pipes");
+    // The committee's own page of the scheme: no board, nothing to edit.
+    await expect(page.getByTestId("board")).toHaveCount(0);
+    await expect(page.getByRole("button", { name: /Undo|Redo|Save now|Rename|\+ Add division/ })).toHaveCount(0);
+    // The committee reads the stop list and the headline figures, not the firm's working figures, money or history.
+    await expect(page.getByTestId("stop-list")).toContainText("Open Diapason");
+    await expect(page.getByTestId("headline-figures")).toContainText("Pipes");
     await expect(page.getByTestId("figures")).toHaveCount(0);
     await expect(page.getByTestId("fig-money")).toHaveCount(0);
     await expect(page.locator("main")).not.toContainText(/Total with tax|Labour|£|€|\$|\b(EUR|GBP|USD|CHF)\b/);

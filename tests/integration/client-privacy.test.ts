@@ -18,8 +18,12 @@ const FIRM_ONLY = [
   "crew", "hoursPerWeek", "efficiency", "norms", "ratesProvenance", DEFAULT_RATES.provenance,
   "hoursTotal", "pipeHours", "labourAmount", "materialsAmount", "totalAmount", "directCostAmount", "byCentre",
 ];
-/** A JSON key as it appears in a response or, escaped, inside the page's RSC script payload. */
-const keyPattern = (k: string) => new RegExp(`\\\\?"${k}\\\\?"\\s*:`);
+/**
+ * A JSON key holding an object, as it appears in a response or, escaped, inside the page's RSC script
+ * payload: the estimate's "hours" and "money", money's "margin", the editor's "rates". (A style's
+ * "margin": "0 20px" on a framework page is no leak.)
+ */
+const keyPattern = (k: string) => new RegExp(`\\\\?"${k}\\\\?"\\s*:\\s*\\{`);
 
 function firmOnlyFound(text: string, extraKeys: string[] = []): string[] {
   const words = FIRM_ONLY.filter((w) => text.includes(w));

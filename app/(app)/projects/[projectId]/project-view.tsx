@@ -64,7 +64,7 @@ export function ProjectView({ projectId, can }: { projectId: string; can: Projec
           {can.isClient ? (
             <section className="panel p-4 text-sm" aria-labelledby="people-heading">
               <h2 id="people-heading" className="mb-2 text-xl font-semibold">People on this project</h2>
-              <ul className="space-y-1">{project.members.map((m) => <li key={m.id}>{m.name}{m.id === can.selfId && <span className="text-xs text-tin"> (you)</span>}</li>)}</ul>
+              <ul className="space-y-1" data-testid="people">{project.members.map((m) => <li key={m.id}>{m.name}{m.id === can.selfId && <span className="text-xs text-tin"> (you)</span>}</li>)}</ul>
             </section>
           ) : (
             <MembersPanel projectId={project.id} members={firm} mayEdit={can.editProject} selfId={can.selfId} />
