@@ -2,6 +2,9 @@
 // - the scheme API answers a read in under 50 ms (median of 30);
 // - a keyboard drag-and-drop move of a stop to another division updates the figures panel
 //   within 100 ms (median of 20), timed in the page from the drop key to the panel's next paint.
+// - the comparison route answers for the two parish schemes, and for the large scheme against a copy
+//   with ten changes, in under 150 ms (median of 30), printed beside the scheme read of the same run;
+//   the cost of each change (one estimate per change, asked for after the comparison) is printed too.
 // Started by scripts/bench.sh against a production build with the demo data.
 import { chromium, type Page } from "@playwright/test";
 import { demoAccounts } from "../db/demo-accounts";
@@ -71,7 +74,41 @@ async function main() {
     await res.arrayBuffer();
     if (i >= 5) reads.push(performance.now() - t0);
   }
-  console.log(`scheme API read, ${scheme.stopCount} stops: median ${median(reads).toFixed(1)} ms over ${reads.length} reads (target < 50 ms)`);
+  const readMs = median(reads);
+  console.log(`scheme API read, ${scheme.stopCount} stops: median ${readMs.toFixed(1)} ms over ${reads.length} reads (target < 50 ms)`);
+
+  const timeGet = async (url: string, n: number, warm = 5) => {
+    const ms: number[] = [];
+    for (let i = 0; i < n + warm; i++) {
+      const t0 = performance.now();
+      const res = await fetch(url, { headers: { cookie } });
+      if (!res.ok) throw new Error(`${url} answered ${res.status}`);
+      await res.arrayBuffer();
+      if (i >= warm) ms.push(performance.now() - t0);
+    }
+    return median(ms);
+  };
+  const parish = projects.find((p) => p.name.startsWith("St Aldric"))!;
+  const parishSchemes = ((await (await fetch(`${base}/api/projects/${parish.id}`, { headers: { cookie } })).json()) as { schemes: { id: string }[] }).schemes;
+  const parishIds = parishSchemes.map((s) => s.id).join(",");
+  const parishMs = await timeGet(`${base}/api/projects/${parish.id}/compare?schemes=${parishIds}`, 30);
+  console.log(`comparison, the two parish schemes: median ${parishMs.toFixed(1)} ms over 30 (target < 150 ms; ${(parishMs / readMs).toFixed(1)}× the scheme read)`);
+
+  // A copy of the large scheme with ten changes: five stops restored instead of new, five removed.
+  const post = (url: string, method: string, body: unknown) => fetch(url, { method, headers: { cookie, "content-type": "application/json", origin: base }, body: JSON.stringify(body) });
+  const copy = ((await (await post(`${base}/api/schemes/${scheme.id}/duplicate`, "POST", { name: `Bench copy ${Date.now()}` })).json()) as { scheme: { id: string; version: number; document: { divisions: { stops: { id: string; treatment: string; source?: string }[] }[] } } }).scheme;
+  const used = new Set(copy.document.divisions.flatMap((d) => d.stops.map((s) => s.source).filter(Boolean)));
+  const plain = copy.document.divisions.flatMap((d) => d.stops).filter((s) => s.treatment === "new" && !used.has(s.id) && !s.source);
+  for (const s of plain.slice(0, 5)) s.treatment = "restored";
+  const gone = new Set(plain.slice(5, 10).map((s) => s.id));
+  for (const d of copy.document.divisions) d.stops = d.stops.filter((s) => !gone.has(s.id));
+  const saved = await post(`${base}/api/schemes/${copy.id}`, "PUT", { version: copy.version, document: copy.document, note: "ten changes for the benchmark" });
+  if (!saved.ok) throw new Error(`saving the copy answered ${saved.status}: ${await saved.text()}`);
+  const largeIds = `${scheme.id},${copy.id}`;
+  const largeMs = await timeGet(`${base}/api/projects/${project.id}/compare?schemes=${largeIds}`, 30);
+  console.log(`comparison, large scheme against a copy with ten changes: median ${largeMs.toFixed(1)} ms over 30 (target < 150 ms; ${(largeMs / readMs).toFixed(1)}× the scheme read)`);
+  const costsMs = await timeGet(`${base}/api/projects/${project.id}/compare/costs?schemes=${largeIds}`, 5, 1);
+  console.log(`cost of each of the ten changes, large scheme: median ${costsMs.toFixed(1)} ms over 5 (no target; loaded after the comparison)`);
 
   const browser = await chromium.launch({
     executablePath: "/usr/bin/chromium",
