@@ -5,6 +5,7 @@ import type { CommentInput, CommentRead, InvitationSummary, InviteInput, Prefere
 import type { SchemeDocument, SchemeRead, SchemeStatus } from "@/lib/spec/document";
 import type { ProjectInput, ProjectRead, ProjectSummary, SchemeSummary } from "@/lib/spec/projects";
 import type { OutboxMessage } from "@/lib/mail/types";
+import type { Role } from "@/lib/roles";
 
 /** The client's one error type: the server's typed code (lib/server/errors.ts), or "network" when no answer came. */
 export type ClientErrorCode = ErrorCode | "network";
@@ -72,6 +73,8 @@ export function fieldMessages(err: ApiError): string[] {
   return [...new Set(all.length ? all : [err.message])];
 }
 
+export type UserRow = { id: string; name: string; email: string; role: Role; disabled: boolean };
+
 export type Revision = { version: number; note: string | null; authorName: string | null; createdAt: string };
 
 export const api = {
@@ -117,6 +120,9 @@ export const api = {
     call<{ comparison: ComparisonView }>("GET", `/api/projects/${projectId}/compare?schemes=${schemeIds.map(encodeURIComponent).join(",")}`),
   changeCosts: (projectId: string, schemeIds: readonly string[]) =>
     call<{ costs: { schemeId: string; changes: ChangeCost[] }[] }>("GET", `/api/projects/${projectId}/compare/costs?schemes=${schemeIds.map(encodeURIComponent).join(",")}`),
+
+  // Users (administrators)
+  listUsers: () => call<{ users: UserRow[] }>("GET", "/api/users"),
 
   // Outgoing mail (administrators)
   listOutgoingMail: () => call<{ messages: OutboxMessage[] }>("GET", "/api/admin/mail"),

@@ -21,4 +21,5 @@ export const keys = {
     notes: (schemeId: string) => ["schemes", schemeId, "notes"] as const,
   },
   mail: { outbox: ["mail", "outbox"] as const },
+  users: { list: ["users", "list"] as const },
 } as const;

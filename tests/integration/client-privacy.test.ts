@@ -99,7 +99,7 @@ describe("a committee member", () => {
     }
     for (const path of pages) {
       // The HTML with its inline RSC payload, and the RSC payload a client-side navigation fetches.
-      for (const headers of [{ cookie: clientCookie }, { cookie: clientCookie, rsc: "1" }]) {
+      for (const headers of [{ cookie: clientCookie }, { cookie: clientCookie, rsc: "1" }] as Record<string, string>[]) {
         const res = await fetch(`${baseUrl}${path}`, { headers });
         expect(res.status, path).toBe(200);
         const text = await res.text();

@@ -1,5 +1,4 @@
 "use server";
-import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import { createUser, updateUser } from "@/db/queries/users";
 import { action } from "@/lib/server/guard";
@@ -7,7 +6,6 @@ import { newUserSchema, updateUserSchema } from "@/lib/validation/users";
 
 export const addUserAction = action({ permission: "users:manage", input: newUserSchema }, async ({ input }) => {
   const user = await createUser({ input });
-  revalidatePath("/admin/users");
   return { id: user.id };
 });
 
@@ -15,6 +13,5 @@ const changeSchema = z.object({ id: z.uuid(), change: updateUserSchema });
 
 export const changeUserAction = action({ permission: "users:manage", input: changeSchema }, async ({ input, user }) => {
   const updated = await updateUser({ id: input.id, input: input.change, actingUserId: user.id });
-  revalidatePath("/admin/users");
   return { id: updated.id, role: updated.role, disabled: updated.disabled };
 });

@@ -3,8 +3,9 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { roleLabels, roles } from "@/lib/roles";
+import { ApiError } from "@/components/spec/api";
+import { useAddUser } from "@/lib/query/hooks";
 import { newUserSchema, type NewUserInput } from "@/lib/validation/users";
-import { addUserAction } from "./actions";
 
 export function AddUserForm() {
   const [notice, setNotice] = useState<{ ok: boolean; text: string } | null>(null);
@@ -13,18 +14,20 @@ export function AddUserForm() {
     defaultValues: { role: "designer" },
   });
 
+  const add = useAddUser();
   const onSubmit = handleSubmit(async (values) => {
     setNotice(null);
-    const res = await addUserAction(values);
-    if (res.ok) {
+    try {
+      await add.mutateAsync(values);
       reset({ name: "", email: "", password: "", role: values.role });
       setNotice({ ok: true, text: `${values.name} can now sign in.` });
-      return;
+    } catch (err) {
+      const e = err instanceof ApiError ? err : new ApiError(0, "network", "The user could not be added.");
+      for (const [field, messages] of Object.entries(e.fields ?? {})) {
+        if (field in values) setError(field as keyof NewUserInput, { type: "server", message: messages.join(" ") });
+      }
+      setNotice({ ok: false, text: e.message });
     }
-    for (const [field, messages] of Object.entries(res.fields ?? {})) {
-      if (field in values) setError(field as keyof NewUserInput, { type: "server", message: messages.join(" ") });
-    }
-    setNotice({ ok: false, text: res.message });
   });
 
   const err = formState.errors;

@@ -1,21 +1,14 @@
 "use client";
-import { useState, useTransition } from "react";
+import type { UserRow as Row } from "@/components/spec/api";
+import { errorText } from "@/components/spec/api";
+import { useChangeUser } from "@/lib/query/hooks";
 import { roleLabels, roles, type Role } from "@/lib/roles";
-import { changeUserAction } from "./actions";
-
-type Row = { id: string; name: string; email: string; role: Role; disabled: boolean };
 
 export function UserRow({ user, isSelf }: { user: Row; isSelf: boolean }) {
-  const [pending, startTransition] = useTransition();
-  const [error, setError] = useState<string | null>(null);
-
-  function change(change: { role?: Role; disabled?: boolean }) {
-    setError(null);
-    startTransition(async () => {
-      const res = await changeUserAction({ id: user.id, change });
-      if (!res.ok) setError(res.message);
-    });
-  }
+  const mutation = useChangeUser();
+  const pending = mutation.isPending;
+  const error = mutation.error ? errorText(mutation.error) : null;
+  const change = (change: { role?: Role; disabled?: boolean }) => mutation.mutate({ id: user.id, change });
 
   return (
     <tr className="border-t border-tin-rule align-top" data-testid={`user-${user.email}`}>
