@@ -16,9 +16,9 @@ export default async function SignedInLayout({ children }: { children: ReactNode
   return (
     <div className="min-h-screen">
       <header className="border-b border-tin-rule bg-paper-card/80 print:hidden">
-        <div className="mx-auto flex max-w-[1600px] items-center gap-6 px-5 py-2.5">
+        <div className="mx-auto flex max-w-[1600px] flex-wrap items-center gap-x-6 gap-y-1 px-5 py-2.5">
           <Link href="/" aria-label="Stopwright home"><Wordmark /></Link>
-          <nav aria-label="Main" className="flex gap-1 text-sm">
+          <nav aria-label="Main" className="flex flex-wrap gap-1 text-sm">
             {links.map((l) => (
               <Link key={l.href} href={l.href} className="rounded px-2.5 py-1 text-ink-soft hover:bg-paper-deep hover:text-ink">
                 {l.label}
