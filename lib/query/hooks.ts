@@ -5,17 +5,14 @@
  * they make stale. Errors are ApiError, whose code is the server's typed code.
  */
 import { useMutation, useQuery, useQueryClient, type QueryKey } from "@tanstack/react-query";
-import { addUserAction, changeUserAction } from "@/app/(app)/admin/users/actions";
-import { api, unwrapAction, type UserRow } from "@/components/spec/api";
-import type { Role } from "@/lib/roles";
-import type { NewUserInput } from "@/lib/validation/users";
+import { api, type UserRow } from "@/components/spec/api";
 import type { CommentInput } from "@/lib/spec/committee";
 import type { SchemeStatus } from "@/lib/spec/document";
 import type { ProjectInput } from "@/lib/spec/projects";
 import { keys } from "./keys";
 
 /** A mutation that refetches what it makes stale once it succeeds. */
-function useWrite<A, R>(fn: (args: A) => Promise<R>, stale: (args: A, result: R) => readonly QueryKey[]) {
+export function useWrite<A, R>(fn: (args: A) => Promise<R>, stale: (args: A, result: R) => readonly QueryKey[]) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: fn,
@@ -72,12 +69,9 @@ export const useComparison = (projectId: string, schemeIds: readonly string[]) =
 export const useChangeCosts = (projectId: string, schemeIds: readonly string[], enabled: boolean) =>
   useQuery({ queryKey: keys.projects.changeCosts(projectId, schemeIds), queryFn: async () => (await api.changeCosts(projectId, schemeIds)).costs, enabled: enabled && schemeIds.length >= 2 });
 
-// ── users (administrators); the writes are server actions, guarded like every route ──
+// ── users (administrators) ──
 export const useUsers = () => useQuery({ queryKey: keys.users.list, queryFn: async () => (await api.listUsers()).users.map(userRow) });
 const userRow = (u: UserRow): UserRow => ({ id: u.id, name: u.name, email: u.email, role: u.role, disabled: u.disabled });
-export const useAddUser = () => useWrite(async (input: NewUserInput) => unwrapAction(await addUserAction(input)), () => [keys.users.list]);
-export const useChangeUser = () =>
-  useWrite(async (args: { id: string; change: { role?: Role; disabled?: boolean } }) => unwrapAction(await changeUserAction(args)), () => [keys.users.list]);
 
 // ── outgoing mail ──
 export const useOutbox = () => useQuery({ queryKey: keys.mail.outbox, queryFn: async () => (await api.listOutgoingMail()).messages, refetchInterval: 5_000 });

@@ -4,7 +4,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { roleLabels, roles } from "@/lib/roles";
 import { ApiError } from "@/components/spec/api";
-import { useAddUser } from "@/lib/query/hooks";
+import { useAddUser } from "./hooks";
 import { newUserSchema, type NewUserInput } from "@/lib/validation/users";
 
 export function AddUserForm() {

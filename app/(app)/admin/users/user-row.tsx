@@ -1,7 +1,7 @@
 "use client";
 import type { UserRow as Row } from "@/components/spec/api";
 import { errorText } from "@/components/spec/api";
-import { useChangeUser } from "@/lib/query/hooks";
+import { useChangeUser } from "./hooks";
 import { roleLabels, roles, type Role } from "@/lib/roles";
 
 export function UserRow({ user, isSelf }: { user: Row; isSelf: boolean }) {
