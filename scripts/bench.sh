@@ -19,7 +19,7 @@ export DATABASE_URL=$(bash scripts/db.sh url --test)
 export NEXTAUTH_URL=http://127.0.0.1:$port NEXTAUTH_SECRET=$(random_secret) NEXT_DIST_DIR=.next-bench
 export BENCH_BASE_URL=$NEXTAUTH_URL
 # The demo data queues mail: it goes to a stand-in of the bench's own, never to another checkout's.
-export SMTP_HOST=127.0.0.1 SMTP_PORT=${BENCH_SMTP_PORT:-2545} SMTP_SECURITY=none
+export SMTP_HOST=127.0.0.1 SMTP_PORT=${BENCH_SMTP_PORT:-2545} SMTP_SECURITY=none MAIL_FROM="Stopwright bench <mail@stopwright.bench>"
 server_pid=""
 fake_smtp_pid=""
 cleanup() {
