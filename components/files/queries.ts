@@ -2,12 +2,10 @@
 /** The browser's side of survey files: query keys, reads, and the upload (presigned PUT with progress). */
 import { ApiError, call } from "@/components/spec/api";
 import type { FileUpdate, StartUpload, SurveyFile, UploadTicket } from "@/lib/files/kinds";
+import { keys } from "@/lib/query/keys";
 
-export const fileQueryKeys = {
-  /** Every list of a project's files starts with this, so one invalidation refreshes the gallery and every stop's view. */
-  project: (projectId: string) => ["files", projectId] as const,
-  list: (projectId: string, filter: { schemeId?: string; stopId?: string } = {}) => ["files", projectId, filter] as const,
-};
+/** The files' keys from the app's one query-key factory (lib/query/keys.ts). */
+export const fileQueryKeys = keys.files;
 
 export function listFiles(projectId: string, filter: { schemeId?: string; stopId?: string } = {}) {
   const q = new URLSearchParams(Object.entries(filter).filter(([, v]) => v) as [string, string][]).toString();

@@ -7,8 +7,11 @@ import type { ProjectInput, ProjectRead, ProjectSummary, SchemeSummary } from "@
 import type { OutboxMessage } from "@/lib/mail/types";
 import type { Role } from "@/lib/roles";
 
-/** The client's one error type: the server's typed code (lib/server/errors.ts), or "network" when no answer came. */
-export type ClientErrorCode = ErrorCode | "network";
+/**
+ * The client's one error type: the server's typed code (lib/server/errors.ts); "network" when no
+ * answer came; "storage" when the file store refused a direct upload (components/files).
+ */
+export type ClientErrorCode = ErrorCode | "network" | "storage";
 
 export class ApiError extends Error {
   constructor(

@@ -20,6 +20,11 @@ export const keys = {
     comments: (schemeId: string) => ["schemes", schemeId, "comments"] as const,
     notes: (schemeId: string) => ["schemes", schemeId, "notes"] as const,
   },
+  files: {
+    /** Every list of a project's files starts with this, so one invalidation refreshes the gallery and every stop's view. */
+    project: (projectId: string) => ["files", projectId] as const,
+    list: (projectId: string, filter: { schemeId?: string; stopId?: string } = {}) => ["files", projectId, filter] as const,
+  },
   mail: { outbox: ["mail", "outbox"] as const },
   users: { list: ["users", "list"] as const },
 } as const;

@@ -91,7 +91,7 @@ describe("a committee member", () => {
     const [s0, s1] = mine.schemes.map((s: { id: string }) => s.id);
     await api(`/api/schemes/${s0}/notes`, { method: "POST", cookie, body: { body: "firm-note-marker" } });
     const json = [`/api/projects`, `/api/projects/${p}`, `/api/schemes/${s0}`, `/api/schemes/${s0}/comments`, `/api/projects/${p}/compare?schemes=${s0},${s1}`, `/api/projects/${p}/preference`];
-    const pages = [`/`, `/projects`, `/projects/${p}`, `/projects/${p}/schemes/${s0}`, `/projects/${p}/schemes/${s0}/stop-list`, `/projects/${p}/compare?schemes=${s0},${s1}`];
+    const pages = [`/`, `/projects`, `/projects/${p}`, `/projects/${p}/schemes/${s0}`, `/projects/${p}/schemes/${s0}/stop-list`, `/projects/${p}/compare?schemes=${s0},${s1}`, `/projects/${p}/files`];
     for (const path of json) {
       const res = await api(path, { cookie: clientCookie });
       expect(res.status, path).toBe(200);
