@@ -17,7 +17,17 @@ export const firms = pgTable("firms", {
   address: text("address").notNull().default(""),
   email: text("email").notNull().default(""),
   phone: text("phone").notNull().default(""),
+  website: text("website").notNull().default(""),
+  /** Company registration, tax number and the like, as the firm prints them under its address. */
+  registration: text("registration").notNull().default(""),
+  /** The logo as PNG (an SVG upload is rasterised on saving), base64, with its size in pixels. */
+  logoPng: text("logo_png"),
+  logoWidth: integer("logo_width"),
+  logoHeight: integer("logo_height"),
+  /** Guards the details form against overwriting a colleague's save. */
+  version: integer("version").notNull().default(1),
   createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });
 
 export const users = pgTable(
@@ -332,3 +342,87 @@ export const schemePreferences = pgTable(
 );
 
 export type Invitation = typeof invitations.$inferSelect;
+
+// ── The firm's rate book and its quotations ──────────────────────────────────────────────────────
+
+/**
+ * A named set of the firm's rates and norms. Every saved change is a new row in rate_set_versions;
+ * `version` is the latest, and guards against overwriting a colleague's save. One set is current:
+ * schemes are priced against it unless another is chosen.
+ */
+export const rateSets = pgTable(
+  "rate_sets",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    name: text("name").notNull(),
+    isCurrent: boolean("is_current").notNull().default(false),
+    version: integer("version").notNull().default(1),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex("rate_sets_name_key").on(t.name),
+    uniqueIndex("rate_sets_one_current").on(t.isCurrent).where(sql`${t.isCurrent}`),
+  ],
+);
+
+/** One saved state of a rate set: the whole rates object as the estimator's ratesSchema reads it. */
+export const rateSetVersions = pgTable(
+  "rate_set_versions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    rateSetId: uuid("rate_set_id").notNull().references(() => rateSets.id, { onDelete: "cascade" }),
+    version: integer("version").notNull(),
+    effectiveDate: date("effective_date").notNull(),
+    rates: jsonb("rates").notNull(),
+    note: text("note").notNull().default(""),
+    authorId: uuid("author_id").references(() => users.id),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("rate_set_versions_version_key").on(t.rateSetId, t.version)],
+);
+
+/** Stored states; "lapsed" is read from the validity date of an issued quotation, never stored. */
+export const quoteStatuses = ["draft", "issued", "accepted", "declined"] as const;
+export const quoteStatusEnum = pgEnum("quote_status", quoteStatuses);
+
+/** The last quotation number given in each year: numbers are handed out in one statement, so two servers never give the same. */
+export const quoteCounters = pgTable("quote_counters", {
+  year: integer("year").primaryKey(),
+  last: integer("last").notNull(),
+});
+
+/**
+ * A quotation priced from one scheme revision and one rate-set version. When issued it keeps its own
+ * snapshot (scheme document, rates, estimate, commercial lines, totals, firm and client details), and
+ * its documents are written from that snapshot alone.
+ */
+export const quotations = pgTable(
+  "quotations",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    projectId: uuid("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    schemeId: uuid("scheme_id").references(() => schemes.id, { onDelete: "set null" }),
+    schemeVersion: integer("scheme_version").notNull(),
+    rateSetVersionId: uuid("rate_set_version_id").references(() => rateSetVersions.id, { onDelete: "set null" }),
+    number: text("number").notNull(),
+    status: quoteStatusEnum("status").notNull().default("draft"),
+    version: integer("version").notNull().default(1),
+    commercial: jsonb("commercial").notNull(),
+    snapshot: jsonb("snapshot"),
+    validUntil: date("valid_until"),
+    issuedAt: timestamp("issued_at", { withTimezone: true }),
+    issuedById: uuid("issued_by_id").references(() => users.id),
+    decidedAt: timestamp("decided_at", { withTimezone: true }),
+    /** When the tender was sent to the committee; a client sees only tenders sent to them. */
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+    createdById: uuid("created_by_id").references(() => users.id),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("quotations_number_key").on(t.number), index("quotations_project_idx").on(t.projectId)],
+);
+
+export type RateSet = typeof rateSets.$inferSelect;
+export type RateSetVersion = typeof rateSetVersions.$inferSelect;
+export type Quotation = typeof quotations.$inferSelect;
