@@ -38,7 +38,7 @@ async function loadCompared({ user, projectId, schemeIds }: { user: SessionUser;
 
 export async function getComparisonForUser({ user, projectId, schemeIds }: { user: SessionUser; projectId: string; schemeIds: string[] }): Promise<ComparisonView> {
   const { tuning, schemes } = await loadCompared({ user, projectId, schemeIds });
-  return compareDocuments({ schemes, tuning, rates: firmRates(), access: { money: can(user.role, "money:read"), hours: can(user.role, "estimate:read") } });
+  return compareDocuments({ schemes, tuning, rates: await firmRates(), access: { money: can(user.role, "money:read"), hours: can(user.role, "estimate:read") } });
 }
 
 /** For the firm (money:read): the cost of each stop change of every scheme against the first. */
@@ -46,5 +46,6 @@ export async function getChangeCostsForUser({ user, projectId, schemeIds }: { us
   if (!can(user.role, "money:read")) throw new AppError("forbidden", "Money is not shown to this role.");
   const { tuning, schemes } = await loadCompared({ user, projectId, schemeIds });
   const [base, ...others] = schemes;
-  return others.map((o) => ({ schemeId: o.id, changes: costOfChanges({ base: base!.document, other: o.document, tuning, rates: firmRates() }) }));
+  const rates = await firmRates();
+  return others.map((o) => ({ schemeId: o.id, changes: costOfChanges({ base: base!.document, other: o.document, tuning, rates }) }));
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { DEFAULT_RATES } from "@/lib/estimate/demo-rates";
+import { getPricingRates } from "@/db/queries/rate-sets";
 import type { Rates } from "@/lib/estimate";
 import type { FigureSource } from "@/components/spec/use-figures";
 import { can } from "@/lib/roles";
@@ -8,11 +8,11 @@ import type { SchemeRead } from "@/lib/spec/document";
 import type { SessionUser } from "./guard";
 
 /**
- * The firm's rates and norms. Until the firm keeps its own (the estimator's rate tables), these are
- * the invented demo values; every caller goes through here so that change lands in one place.
+ * The firm's rates and norms from its rate book (PostgreSQL): the current set's latest version, or
+ * the set chosen. Every caller goes through here, so pricing follows the rate book everywhere.
  */
-export function firmRates(): Rates {
-  return DEFAULT_RATES;
+export async function firmRates({ rateSetId }: { rateSetId?: string | null } = {}): Promise<Rates> {
+  return (await getPricingRates({ rateSetId })).rates;
 }
 
 /**
@@ -21,8 +21,8 @@ export function firmRates(): Rates {
  * its figures are worked out here once and sent without money, and the browser gets only the rules a
  * chest drawing needs — no labour norm, crew size, price or percentage.
  */
-export function figureSourceFor(user: SessionUser, scheme: SchemeRead): FigureSource {
-  const rates = firmRates();
+export async function figureSourceFor(user: SessionUser, scheme: SchemeRead): Promise<FigureSource> {
+  const rates = await firmRates();
   if (can(user.role, "money:read")) return { kind: "live", rates };
   const r = estimateDocument(scheme.document, scheme.tuning, rates);
   const figures = r.ok ? { ok: true as const, scheme: r.scheme, estimate: estimateWithoutMoney(r.estimate), ms: 0 } : r;

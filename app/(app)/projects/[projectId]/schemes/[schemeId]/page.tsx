@@ -15,8 +15,8 @@ import { loadSchemePage } from "./load";
 export const metadata: Metadata = { title: "Scheme" };
 
 /** Worked out here so the committee's browser receives the numbers alone. */
-function headlineFigures(scheme: SchemeRead): HeadlineFigures | null {
-  const r = estimateDocument(scheme.document, scheme.tuning, firmRates());
+async function headlineFigures(scheme: SchemeRead): Promise<HeadlineFigures | null> {
+  const r = estimateDocument(scheme.document, scheme.tuning, await firmRates());
   if (!r.ok) return null;
   const t = r.estimate.totals;
   return {
@@ -46,7 +46,7 @@ export default async function SchemePage({ params }: { params: Promise<{ project
     return (
       <Hydrate>
         <div className="space-y-4">
-          <CommitteeScheme scheme={scheme} projectName={project.name} clientName={project.clientName} figures={headlineFigures(scheme)} />
+          <CommitteeScheme scheme={scheme} projectName={project.name} clientName={project.clientName} figures={await headlineFigures(scheme)} />
           {discussion}
         </div>
       </Hydrate>
@@ -64,7 +64,7 @@ export default async function SchemePage({ params }: { params: Promise<{ project
           showMoney={can(user.role, "money:read")}
           showFigures={can(user.role, "estimate:read")}
           canSeeRevisions={can(user.role, "revisions:read")}
-          figureSource={figureSourceFor(user, scheme)}
+          figureSource={await figureSourceFor(user, scheme)}
         />
         {discussion}
       </div>

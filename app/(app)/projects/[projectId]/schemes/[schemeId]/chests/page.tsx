@@ -20,7 +20,7 @@ export default async function ChestsPage({ params }: { params: Promise<{ project
         <Link href={`/projects/${projectId}/schemes/${schemeId}`} className="btn">← Back to the editor</Link>
         <h1 className="text-2xl font-semibold">Chests of {scheme.document.name}</h1>
       </div>
-      <ChestsClient document={scheme.document} tuning={scheme.tuning} source={figureSourceFor(user, scheme)} />
+      <ChestsClient document={scheme.document} tuning={scheme.tuning} source={await figureSourceFor(user, scheme)} />
     </div>
   );
 }
