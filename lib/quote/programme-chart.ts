@@ -86,7 +86,13 @@ export function programmeSvg(p: Programme, { width = 720 }: { width?: number } =
   }
   const endX = x(p.totalWeeks);
   out.push(`<line x1="${endX.toFixed(1)}" y1="${top - 4}" x2="${endX.toFixed(1)}" y2="${axisY + 2}" stroke="${BRASS}" stroke-width="1.5"/>`);
-  const summary = words.late ? words.detail : p.completionDate ? `Completion ${formatLongDate(p.completionDate)}${p.targetDate ? ` — ${words.detail.replace(/^This /, "")}` : ""}` : `Total ${weeksText(p.totalWeeks)}`;
+  const summary = !p.completionDate
+    ? `Total ${weeksText(p.totalWeeks)}; no start date yet`
+    : p.slackWeeks === undefined
+      ? `Completion ${formatLongDate(p.completionDate)}`
+      : words.late
+        ? `Late by ${weeksText(Math.abs(p.slackWeeks))}: completion ${formatLongDate(p.completionDate)}`
+        : `Completion ${formatLongDate(p.completionDate)}, ${weeksText(p.slackWeeks)} before the target`;
   out.push(`<text x="${left}" y="${axisY + 38}" font-size="12" font-weight="600" fill="${words.late ? CLASH : INK}">${words.late ? "▲ " : ""}${esc(summary)}</text>`);
   out.push("</svg>");
   return out.join("");
