@@ -10,7 +10,9 @@ export default async function SignedInLayout({ children }: { children: ReactNode
   const links = [
     { href: "/", label: "Home", show: true },
     { href: "/projects", label: "Projects", show: can(user.role, "projects:read") },
+    { href: "/rates", label: "Rate book", show: can(user.role, "rates:manage") },
     { href: "/admin/users", label: "Users", show: can(user.role, "users:manage") },
+    { href: "/admin/firm", label: "Firm details", show: can(user.role, "firm:manage") },
     { href: "/admin/mail", label: "Outgoing mail", show: can(user.role, "mail:read") },
   ].filter((l) => l.show);
   return (

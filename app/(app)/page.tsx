@@ -15,6 +15,8 @@ const homes: Record<Role, { heading: string; lead: string; tiles: Tile[] }> = {
     lead: "People, roles and the firm's details.",
     tiles: [
       { title: "Users and roles", text: "Add colleagues and committee members, change roles, disable accounts.", href: "/admin/users" },
+      { title: "Firm details", text: "Name, address, contact and logo, as the tender's cover shows them.", href: "/admin/firm" },
+      { title: "Rate book", text: "Hourly rates, material prices, labour norms and percentages, in versions.", href: "/rates" },
       { title: "Projects", text: "Every instrument job of the firm.", href: "/projects" },
     ],
   },
@@ -26,7 +28,10 @@ const homes: Record<Role, { heading: string; lead: string; tiles: Tile[] }> = {
   estimator: {
     heading: "Estimates and quotations",
     lead: "Price schemes from the firm's rates and labour norms.",
-    tiles: [{ title: "Projects", text: "Schemes waiting to be priced.", href: "/projects" }],
+    tiles: [
+      { title: "Projects", text: "Schemes waiting to be priced; quotations and tenders.", href: "/projects" },
+      { title: "Rate book", text: "The firm's rates and labour norms, in versions you can compare, export and import.", href: "/rates" },
+    ],
   },
   workshop: {
     heading: "Workshop",

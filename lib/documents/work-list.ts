@@ -35,11 +35,19 @@ const GROUPS = [
 /** The ranks the shop works on, grouped and in the order it takes them. Pure, for the document and its test. */
 export function workItems(q: Quotation): WorkItem[] {
   const items: (WorkItem & { order: number })[] = [];
+  const byId = new Map(q.scheme.document.divisions.flatMap((d) => d.stops.map((s) => [s.id, s] as const)));
+  // An extension's new pipes are made like its rank's: follow the sources to the stop that owns the rank.
+  const rootOf = (id: string) => {
+    let s = byId.get(id);
+    for (let i = 0; s && (s.treatment === "extension" || s.treatment === "borrowed") && s.source && i < 16; i++) s = byId.get(s.source) ?? s;
+    return s;
+  };
   for (const d of q.estimate.divisions) {
     const doc = q.scheme.document.divisions.find((x) => x.id === d.id);
     for (const s of d.stops) {
-      const src = doc?.stops.find((x) => x.id === s.id);
-      if (!src) continue;
+      const own = doc?.stops.find((x) => x.id === s.id);
+      const src = own ? rootOf(own.id) : undefined;
+      if (!own || !src) continue;
       const reed = src.family === "reed" || src.construction.startsWith("reed");
       const wood = WOODS.has(src.material);
       let group: number;
@@ -48,7 +56,7 @@ export function workItems(q: Quotation): WorkItem[] {
       else if (s.treatment === "revoiced") group = 4;
       else if (s.treatment === "relocated") group = 5;
       else continue;
-      items.push({ group: GROUPS[group]!, division: d.name, stop: s, pitch: pitchText(src), material: materialLabels[src.material], family: src.family, order: group });
+      items.push({ group: GROUPS[group]!, division: d.name, stop: s, pitch: pitchText(own), material: materialLabels[src.material], family: src.family, order: group });
     }
   }
   return items
@@ -92,7 +100,7 @@ export function workListDocument(q: Quotation, fonts: DocumentFonts) {
   body.push(heading("Safety", 2));
   for (const c of e.cautions) body.push(para(c.text));
   return houseDocument(
-    { title: `Work list ${q.number}`, subject: "Workshop work list", headerLeft: q.firm.name || "Work list", headerRight: `Work list ${q.number} · ${q.scheme.name}`, footerNote: `${q.number} · workshop copy`, body },
+    { title: `Work list ${q.number}`, subject: "Workshop work list", headerLeft: q.firm.name || "Work list", headerRight: `Work list ${q.number}`, footerNote: `${q.number} · workshop copy`, body },
     fonts,
     q.firm.name || "Stopwright",
   );
