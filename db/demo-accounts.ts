@@ -3,9 +3,11 @@ import type { Role } from "../lib/roles";
 /** Invented people of the invented demo firm; the passwords are printed by `npm run demo` and in the README. */
 export const demoFirm = {
   name: "Corvin Lathe Organ Builders (demo firm)",
-  address: "Unit 4, Saltmarsh Yard, Wexmoor (invented address)",
+  address: "Unit 4, Saltmarsh Yard\nWexmoor WX4 0AA (invented address)",
   email: "office@corvinlathe.example",
   phone: "+44 0000 000000 (invented)",
+  website: "corvinlathe.example",
+  registration: "An invented firm for Stopwright's demonstration; registered nowhere.",
 };
 
 export const demoAccounts: ReadonlyArray<{ email: string; name: string; role: Role; password: string }> = [

@@ -1,7 +1,7 @@
 // Seeds the invented demo scenario. Idempotent: a second run changes nothing.
 import bcrypt from "bcryptjs";
 import { drizzle } from "drizzle-orm/node-postgres";
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { Pool } from "pg";
 import { pitchText } from "../components/spec/format";
 import { composeMail } from "../lib/mail/compose";
@@ -11,21 +11,36 @@ import { schemeDocumentSchema } from "../lib/spec/document";
 import { demoAccounts, demoCommittee, demoFirm } from "./demo-accounts";
 import { demoDiscussion, demoProjects, restoreScheme } from "./demo-scenario";
 import { newToken } from "./invitation-token";
+import { DEFAULT_RATES } from "../lib/estimate/demo-rates";
+import { svgToPng } from "../lib/documents/assets";
+import { buildQuotation, formatQuoteNumber } from "../lib/quote/quotation";
+import { addDays } from "../lib/quote/quotation";
 import { insertScheme, type Store } from "./scheme-store";
 import { parishSurveyFiles } from "./demo-files";
 import { inspectFile } from "../lib/server/file-check";
 import { fileKeys, writeObject } from "../lib/server/storage";
 import { storageSettings } from "../lib/env";
 import { acceptedTypes } from "../lib/files/kinds";
+import { demoCommercial, demoLogoSvg } from "./demo-quotation";
 import * as schema from "./schema";
 
 async function main() {
   const pool = new Pool({ connectionString: env().DATABASE_URL });
   const db = drizzle(pool, { schema });
+  const logo = await svgToPng(demoLogoSvg, 720);
   try {
     await db.transaction(async (tx) => {
       const firm = await tx.select().from(schema.firms).where(eq(schema.firms.name, demoFirm.name)).limit(1);
-      if (!firm.length) await tx.insert(schema.firms).values(demoFirm);
+      if (!firm.length) {
+        await tx.insert(schema.firms).values({ ...demoFirm, logoPng: logo.png.toString("base64"), logoWidth: logo.width, logoHeight: logo.height });
+      }
+
+      // The firm's rate book starts with the invented demo rates as its current set.
+      let [rateSet] = await tx.select().from(schema.rateSets).where(eq(schema.rateSets.name, "Standard rates")).limit(1);
+      if (!rateSet) {
+        [rateSet] = await tx.insert(schema.rateSets).values({ name: "Standard rates", isCurrent: true }).returning();
+        await tx.insert(schema.rateSetVersions).values({ rateSetId: rateSet!.id, version: 1, effectiveDate: "2027-01-01", rates: DEFAULT_RATES, note: "invented demo values" });
+      }
 
       const byEmail = new Map<string, string>();
       const people = [...demoAccounts, ...demoCommittee.map((c) => ({ ...c, role: "client" as const }))];
@@ -47,9 +62,11 @@ async function main() {
         await tx.insert(schema.projectMembers).values([...firmIds, ...committee].map((userId) => ({ projectId: project!.id, userId })));
         const schemeIds: string[] = [];
         for (const [i, input] of demo.schemes.entries()) {
-          const scheme = await insertScheme(tx, { projectId: project!.id, document: schemeDocumentSchema.parse(input), authorId: designerId, note: "created" });
+          const document = schemeDocumentSchema.parse(input);
+          const scheme = await insertScheme(tx, { projectId: project!.id, document, authorId: designerId, note: "created" });
           schemeIds.push(scheme.id);
           if (demo.shared[i]) await tx.update(schema.schemes).set({ sharedWithClient: true, status: "proposed" }).where(eq(schema.schemes.id, scheme.id));
+          if (input === restoreScheme) await seedQuotation(tx, { project: project!, scheme, document, rateSetId: rateSet!.id, estimatorId: byEmail.get(demoAccounts.find((a) => a.role === "estimator")!.email)! });
         }
         if (demo.project.name !== demoDiscussion.project) continue;
 
@@ -143,6 +160,37 @@ async function seedSurveyFiles(tx: Store, projectName: string, uploaderId: strin
       completedAt: new Date(),
     });
   }
+}
+
+/** The demo's issued quotation of scheme A: issued today, valid for its 90 days, frozen like any other. */
+async function seedQuotation(tx: Store, v: { project: schema.Project; scheme: schema.Scheme; document: ReturnType<typeof schemeDocumentSchema.parse>; rateSetId: string; estimatorId: string }) {
+  const [version] = await tx.select().from(schema.rateSetVersions).where(and(eq(schema.rateSetVersions.rateSetId, v.rateSetId), eq(schema.rateSetVersions.version, 1))).limit(1);
+  const [firm] = await tx.select().from(schema.firms).limit(1);
+  const estimator = demoAccounts.find((a) => a.role === "estimator")!;
+  const issuedOn = new Date().toISOString().slice(0, 10);
+  const year = new Date().getUTCFullYear();
+  const [counter] = await tx
+    .insert(schema.quoteCounters)
+    .values({ year, last: 1 })
+    .onConflictDoUpdate({ target: schema.quoteCounters.year, set: { last: sql`${schema.quoteCounters.last} + 1` } })
+    .returning();
+  const number = formatQuoteNumber(year, counter!.last);
+  const quotation = buildQuotation({
+    number, status: "issued", issuedOn, validUntil: addDays(issuedOn, demoCommercial.validityDays),
+    preparedBy: { name: estimator.name, email: estimator.email },
+    firm: {
+      name: firm!.name, address: firm!.address, email: firm!.email, phone: firm!.phone, website: firm!.website, registration: firm!.registration,
+      logo: firm!.logoPng ? { png: firm!.logoPng, width: firm!.logoWidth!, height: firm!.logoHeight! } : null,
+    },
+    client: { projectName: v.project.name, clientName: v.project.clientName, venue: v.project.venue, location: v.project.location, instrument: v.project.instrument, targetDate: v.project.targetDate },
+    scheme: { id: v.scheme.id, name: v.document.name, description: v.document.description, version: v.scheme.version, tuning: { pitchHz: v.project.pitchHz, temperatureC: v.project.temperatureC }, document: v.document },
+    rateSet: { name: "Standard rates", version: 1, effectiveDate: version!.effectiveDate, rates: DEFAULT_RATES },
+    commercial: demoCommercial,
+  });
+  await tx.insert(schema.quotations).values({
+    projectId: v.project.id, schemeId: v.scheme.id, schemeVersion: v.scheme.version, rateSetVersionId: version!.id, number, status: "issued", version: 2,
+    commercial: demoCommercial, snapshot: quotation, validUntil: quotation.validUntil, issuedAt: new Date(), issuedById: v.estimatorId, createdById: v.estimatorId,
+  });
 }
 
 main().catch((err) => {

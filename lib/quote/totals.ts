@@ -165,3 +165,8 @@ export function formatAmount(amount: string): string {
   const [whole, fraction = "00"] = amount.replace(/^-/, "").split(".");
   return `${negative ? "−" : ""}${whole!.replace(/\B(?=(\d{3})+(?!\d))/g, "\u202f")}.${fraction.padEnd(2, "0")}`;
 }
+
+/** Exact difference b − a of two amounts. */
+export function diffMoney(a: string, b: string): string {
+  return s2(new Dec(b).minus(a));
+}

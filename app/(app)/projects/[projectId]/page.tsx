@@ -3,12 +3,16 @@ import { notFound } from "next/navigation";
 import { listInvitations } from "@/db/queries/committee";
 import { getOwnPreference, summarisePreferences } from "@/db/queries/preferences";
 import { getProjectForUser } from "@/db/queries/projects";
+import { listQuotationsForProject } from "@/db/queries/quotations";
+import { listRateSets } from "@/db/queries/rate-sets";
 import { keys } from "@/lib/query/keys";
 import { Hydrate, prefetch } from "@/lib/query/server";
+import { mayReadQuotation } from "@/lib/quote/access";
 import { can } from "@/lib/roles";
 import { AppError } from "@/lib/server/errors";
 import { requirePageUser } from "@/lib/server/guard";
 import { ProjectView } from "./project-view";
+import { QuotationsPanel } from "./quotations-panel";
 
 export const metadata: Metadata = { title: "Project" };
 
@@ -24,20 +28,35 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
     manageCommittee: can(user.role, "committee:manage"),
     readPreferences: can(user.role, "preferences:read"),
   };
+  let data;
   try {
-    await prefetch(keys.projects.detail(projectId), () => getProjectForUser({ user, projectId }));
+    data = await prefetch(keys.projects.detail(projectId), () => getProjectForUser({ user, projectId }));
   } catch (err) {
     if (err instanceof AppError && (err.code === "not_found" || err.code === "forbidden")) notFound();
     throw err;
   }
-  await Promise.all([
+  const mayIssue = can(user.role, "quotes:issue");
+  const [quotations, rateSets] = await Promise.all([
+    listQuotationsForProject({ user, projectId }),
+    mayIssue ? listRateSets() : Promise.resolve([]),
     abilities.manageCommittee && prefetch(keys.projects.invitations(projectId), () => listInvitations({ user, projectId })),
     abilities.readPreferences && prefetch(keys.projects.preferences(projectId), () => summarisePreferences({ user, projectId })),
     abilities.isClient && prefetch(keys.projects.ownPreference(projectId), () => getOwnPreference({ user, projectId })),
   ]);
   return (
     <Hydrate>
-      <ProjectView projectId={projectId} can={abilities} />
+      <div className="space-y-6">
+        <ProjectView projectId={projectId} can={abilities} />
+        <QuotationsPanel
+          projectId={projectId}
+          initial={quotations}
+          schemes={data.schemes.map((s) => ({ id: s.id, name: s.name }))}
+          rateSets={rateSets.map((r) => ({ id: r.id, name: r.name, isCurrent: r.isCurrent }))}
+          mayIssue={mayIssue && !data.project.archived}
+          mayRead={mayReadQuotation(user.role)}
+          role={user.role}
+        />
+      </div>
     </Hydrate>
   );
 }
