@@ -4,7 +4,12 @@
  * loop over typed arrays computing only the per-pipe formulas (frequency, diameter, speaking length,
  * mouth width, sheet mass) for the large scheme's pipes.
  * Targets (issue 3): large < 2 ms median; 2× size ≤ 2.3× time; ratio to the floor aim < 5×.
+ * Then the estimator's desk (issue 9): issuing a quotation of the large example (estimate, totals and
+ * the snapshot as stored) median ≤ 100 ms, and writing its tender (.docx, fonts and the programme
+ * picture included) median ≤ 300 ms, each beside the estimator's own time in the same run.
  */
+import { writeDocument } from "../lib/documents";
+import { exampleQuotation } from "../lib/quote/example";
 import { DEFAULT_RATES } from "../lib/estimate/demo-rates";
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
@@ -126,7 +131,7 @@ function floorLoop(x: FloorInputs): number {
   return total;
 }
 
-function main(): void {
+function main(): number {
   const small = load("small-two-manual.json");
   const large = load("large-five-manual.json");
   const big = { scheme: doubled(large.scheme), rates: large.rates };
@@ -157,6 +162,26 @@ function main(): void {
   console.log(`doubling costs at most 2.3×:    ${doubling.toFixed(2)}×     ${doubling <= 2.3 ? "meets target" : "MISSES target"}`);
   console.log(`ratio to the floor, aim < 5×:   ${ratio.toFixed(2)}×     ${ratio < 5 ? "meets aim" : "above aim"}`);
   console.log(`ratio to the recurrence floor:  ${(l.ms / runFloorMs).toFixed(1)}×     (the rest is planning, per-stop work, decimal money, result objects)`);
+  return l.ms;
 }
 
-main();
+async function desk(estimatorMs: number): Promise<void> {
+  const file = JSON.parse(readFileSync(join(__dirname, "..", "examples", "large-five-manual.json"), "utf8"));
+  // Issuing: the estimate and totals are computed afresh and the snapshot serialised, as the server stores it.
+  const issueMs = time(() => JSON.stringify(exampleQuotation(file)).length, 5, 30);
+  const q = exampleQuotation(file);
+  await writeDocument("tender", q); // loads the fonts and the SVG renderer once
+  const runs: number[] = [];
+  for (let i = 0; i < 15; i++) {
+    const t0 = process.hrtime.bigint();
+    await writeDocument("tender", q);
+    runs.push(Number(process.hrtime.bigint() - t0) / 1e6);
+  }
+  const tenderMs = median(runs);
+  console.log("");
+  console.log(`issue a quotation (large: estimate, totals, snapshot)   ${issueMs.toFixed(1).padStart(7)} ms  ${issueMs <= 100 ? "meets ≤ 100 ms" : "MISSES ≤ 100 ms"}   (${(issueMs / estimatorMs).toFixed(0)}× the estimator's ${estimatorMs.toFixed(2)} ms)`);
+  console.log(`write the tender (large, .docx with fonts and picture)  ${tenderMs.toFixed(1).padStart(7)} ms  ${tenderMs <= 300 ? "meets ≤ 300 ms" : "MISSES ≤ 300 ms"}   (${(tenderMs / estimatorMs).toFixed(0)}× the estimator's ${estimatorMs.toFixed(2)} ms)`);
+}
+
+const largeMs = main();
+void desk(largeMs);

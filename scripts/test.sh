@@ -7,7 +7,8 @@ cd "$(dirname "$0")/.."
 source scripts/setup.sh
 source scripts/s3-fake.sh
 
-ensure_apt postgresql chromium fonts-dejavu-core fonts-liberation || exit 1
+# LibreOffice (Writer, no GUI) and poppler: the document tests open the tender in a real word processor and read its PDF.
+ensure_apt postgresql chromium fonts-dejavu-core fonts-liberation libreoffice-writer-nogui poppler-utils || exit 1
 ensure_node_modules || exit 1
 
 out=.data/test-output

@@ -37,8 +37,22 @@ function svgRenderer(): Promise<void> {
   return ready;
 }
 
+type Png = { png: Buffer; width: number; height: number };
+// The last pictures drawn: an issued quotation's programme is the same picture every time its tender is written.
+const drawn = new Map<string, Png>();
+
 /** An SVG drawn to PNG at the given pixel width, with the shipped fonts (no system fonts, so every machine draws it alike). */
-export async function svgToPng(svg: string, width: number): Promise<{ png: Buffer; width: number; height: number }> {
+export async function svgToPng(svg: string, width: number): Promise<Png> {
+  const key = `${width}:${svg}`;
+  const hit = drawn.get(key);
+  if (hit) return hit;
+  const out = await draw(svg, width);
+  if (drawn.size >= 16) drawn.delete(drawn.keys().next().value!);
+  drawn.set(key, out);
+  return out;
+}
+
+async function draw(svg: string, width: number): Promise<Png> {
   await svgRenderer();
   const f = documentFonts();
   const r = new Resvg(svg, {

@@ -29,9 +29,14 @@ export function packDocument(doc: Document, date: Date): Buffer {
   const files = compiler.compile(doc, undefined, []);
   const enc = new TextEncoder();
   const entries: Record<string, [Uint8Array, ZipOptions]> = {};
-  for (const [path, data] of files) {
+  const stamp = date.toISOString().replace(/\.\d{3}Z$/, "Z");
+  for (const [path, raw] of files) {
+    // The document's own dates are the quotation's, not the moment it was written.
+    const data = path === "docProps/core.xml" && typeof raw === "string"
+      ? raw.replace(/(<dcterms:(?:created|modified)[^>]*>)[^<]*(<\/dcterms:(?:created|modified)>)/g, `$1${stamp}$2`)
+      : raw;
     const bytes = typeof data === "string" ? enc.encode(data) : data;
-    const level = path.endsWith(".odttf") ? 1 : /\.(png|jpe?g)$/.test(path) ? 0 : 6;
+    const level = path.endsWith(".odttf") || /\.(png|jpe?g)$/.test(path) ? 0 : 1;
     entries[path] = [bytes, { level, mtime: date }];
   }
   return Buffer.from(zipSync(entries));

@@ -35,7 +35,7 @@ const resolver: Resolver<Form> = async (values) => {
   return Object.keys(errors).length ? { values: {}, errors: errors as FieldErrors<Form> } : { values, errors: {} };
 };
 
-function Input({ f, register, errors, currency, label }: { f: RateField; register: UseFormRegister<Form>; errors: FieldErrors<Form>; currency: string; label: string }) {
+function Input({ f, register, errors, currency, label, showUnit = true }: { f: RateField; register: UseFormRegister<Form>; errors: FieldErrors<Form>; currency: string; label: string; showUnit?: boolean }) {
   const id = `rate-${f.key.replace(/[^A-Za-z0-9]/g, "-")}`;
   const error = errorAt(errors, f.key);
   const unit = unitText(f, currency);
@@ -52,7 +52,7 @@ function Input({ f, register, errors, currency, label }: { f: RateField; registe
           data-key={f.key}
           {...register(`rates.${f.key}` as `rates.${string}`)}
         />
-        {unit && <span className="w-16 shrink-0 text-xs text-tin">{unit}</span>}
+        {unit && showUnit && <span className="w-16 shrink-0 text-xs text-tin">{unit}</span>}
       </span>
       {error && <span className="field-error block" id={`${id}-error`} role="alert">{error}</span>}
     </span>
@@ -83,7 +83,7 @@ function Section({ node, depth, register, errors, currency }: { node: Group; dep
       {leaves.length > 0 && (
         <div className="grid gap-x-6 gap-y-2 sm:grid-cols-2">
           {leaves.map((f) => (
-            <label key={f.key} className="grid grid-cols-[1fr_12rem] items-start gap-2 text-sm" htmlFor={`rate-${f.key.replace(/[^A-Za-z0-9]/g, "-")}`}>
+            <label key={f.key} className={`grid items-start gap-2 text-sm ${f.kind === "text" && f.key !== "currency" ? "grid-cols-[1fr_22rem] sm:col-span-2" : "grid-cols-[1fr_12rem]"}`} htmlFor={`rate-${f.key.replace(/[^A-Za-z0-9]/g, "-")}`}>
               <span className="pt-1.5" title={f.description}>{f.label}</span>
               <Input f={f} register={register} errors={errors} currency={currency} label={[...f.groupLabels, f.label].join(" — ")} />
             </label>
@@ -102,10 +102,13 @@ function Section({ node, depth, register, errors, currency }: { node: Group; dep
             <tbody>
               {matrix.groups.map((g) => (
                 <tr key={g.key} className="border-t border-tin-rule align-top">
-                  <th scope="row" className="py-1.5 pr-2 text-left font-normal">{g.label}</th>
+                  <th scope="row" className="py-1.5 pr-2 text-left font-normal">
+                    {g.label}
+                    {unitText(matrix.columns[0]!, currency) && <span className="block text-xs text-tin">{unitText((g.children[0] as { field: RateField }).field, currency)}</span>}
+                  </th>
                   {g.children.map((c) => {
                     const f = (c as { field: RateField }).field;
-                    return <td key={f.key} className="min-w-[8.5rem] px-1 py-1"><Input f={f} register={register} errors={errors} currency={currency} label={[...f.groupLabels, f.label].join(" — ")} /></td>;
+                    return <td key={f.key} className="min-w-[6.5rem] px-1 py-1"><Input f={f} register={register} errors={errors} currency={currency} label={[...f.groupLabels, f.label].join(" — ")} showUnit={false} /></td>;
                   })}
                 </tr>
               ))}
@@ -295,9 +298,6 @@ export function RateBookEditor({ initial }: { initial: RateSetRead }) {
             <button type="button" className="btn sm:col-span-3" onClick={() => { setNotice(null); void refresh(); }}>Load their version (your changes here are discarded)</button>
           )}
         </div>
-        {rateBookTree.children.map((node) =>
-          node.type === "group" ? <Section key={node.key} node={node} depth={0} register={form.register} errors={form.formState.errors} currency={currency} /> : null,
-        )}
         <Section
           node={{ type: "group", key: "general", label: "General", children: rateBookTree.children.filter((c) => c.type === "field") }}
           depth={0}
@@ -305,6 +305,9 @@ export function RateBookEditor({ initial }: { initial: RateSetRead }) {
           errors={form.formState.errors}
           currency={currency}
         />
+        {rateBookTree.children.map((node) =>
+          node.type === "group" ? <Section key={node.key} node={node} depth={0} register={form.register} errors={form.formState.errors} currency={currency} /> : null,
+        )}
       </form>
       <aside className="space-y-4">
         <ComparePanel data={data} />
