@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
 import Papa from "papaparse";
 import { afterAll, describe, expect, it } from "vitest";
-import { api, closeTestDb, makeUser, signIn, testDb } from "../support/server";
+import { api, baseUrl, closeTestDb, makeUser, signIn, testDb } from "../support/server";
 
 afterAll(closeTestDb);
 
@@ -71,7 +71,11 @@ describe("the rate book", () => {
     const set = await newSet(cookie);
     const csv = await api(`/api/rate-sets/${set.set.id}/csv`, { cookie });
     expect(csv.status).toBe(200);
-    expect(csv.text.startsWith("\uFEFFlabel,key,value,unit")).toBe(true);
+    expect(csv.text.startsWith("label,key,value,unit")).toBe(true);
+    // A byte-order mark first (fetch's text() drops it), so spreadsheets read the file as UTF-8.
+    const raw = await fetch(`${baseUrl}/api/rate-sets/${set.set.id}/csv`, { headers: { cookie } });
+    expect([...Buffer.from(await raw.arrayBuffer()).subarray(0, 3)]).toEqual([0xef, 0xbb, 0xbf]);
+    expect(raw.headers.get("content-disposition")).toMatch(/^attachment; filename=".+-v1\.csv"$/);
     const rows = Papa.parse<string[]>(csv.text.replace(/^\uFEFF/, "")).data.filter((r) => r.length > 1);
     const edited = rows.map((r) => (r[1] === "hourlyRate.erection" ? [r[0]!, r[1]!, "61.25", r[3]!] : r));
     const preview = await api(`/api/rate-sets/${set.set.id}/import`, { method: "POST", cookie, body: { version: 1, csv: Papa.unparse(edited), commit: false } });
