@@ -57,7 +57,7 @@ export function FirmForm({ version: initialVersion, details }: { version: number
       <Field id="firm-email" label="E-mail" error={err.email?.message}><input id="firm-email" type="email" className="field" {...form.register("email")} /></Field>
       <Field id="firm-phone" label="Telephone" error={err.phone?.message}><input id="firm-phone" className="field" {...form.register("phone")} /></Field>
       <Field id="firm-website" label="Website" error={err.website?.message}><input id="firm-website" className="field" {...form.register("website")} /></Field>
-      <Field id="firm-registration" label="Registration line" error={err.registration?.message} hint="Company number, tax number…"><input id="firm-registration" className="field" {...form.register("registration")} /></Field>
+      <Field id="firm-registration" label="Registration line" error={err.registration?.message} hint="Company number, tax number…" className="sm:col-span-2"><input id="firm-registration" className="field" {...form.register("registration")} /></Field>
       <div className="sm:col-span-2">
         <span className="label">Logo</span>
         <div className="flex flex-wrap items-center gap-4">
