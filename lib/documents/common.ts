@@ -8,6 +8,8 @@ import {
   AlignmentType, BorderStyle, LineRuleType, TabStopType as Tabs, Document, Footer, Header, HeadingLevel, LevelFormat, PageNumber, Paragraph, ShadingType, Table, TableCell,
   TableLayoutType, TableRow, TabStopType, TextRun, WidthType, type FileChild, type IRunOptions, type ISectionOptions,
 } from "docx";
+import { currencySign } from "@/lib/quote/currency";
+import { formatAmount } from "@/lib/quote/totals";
 import type { DocumentFonts } from "./assets";
 
 export const SERIF = "Source Serif 4";
@@ -125,15 +127,11 @@ export function moneyCell(amount: string, currency: string, opts: { bold?: boole
 export const NNBSP = "\u202f";
 
 export function currencyPrefix(code: string): string {
-  return `${({ EUR: "€", GBP: "£", USD: "US$" } as Record<string, string>)[code] ?? code}${NNBSP}`;
+  return `${currencySign(code)}${NNBSP}`;
 }
 
-/** Thin spaces between thousands; the cents as computed, never through a float. */
-export function formatMoney(amount: string): string {
-  const negative = amount.startsWith("-");
-  const [whole, fraction = "00"] = amount.replace(/^-/, "").split(".");
-  return `${negative ? "−" : ""}${whole!.replace(/\B(?=(\d{3})+(?!\d))/g, NNBSP)}.${fraction.padEnd(2, "0")}`;
-}
+/** Narrow spaces between thousands; the cents as computed, never through a float (one formatter: lib/quote/totals.ts). */
+export const formatMoney = formatAmount;
 
 /** 12 345.6 with a thin space between thousands (toLocaleString is slow enough to show in a long table). */
 export function formatCount(n: number, digits = 0): string {

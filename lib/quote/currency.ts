@@ -17,7 +17,13 @@ export function currencyProblem(code: string): string | null {
   return null;
 }
 
-/** "€", "£", "$"… where the symbol is unambiguous in English; otherwise the code ("CHF 1 200.00"). */
+/** "€", "£", "US$" where the sign is unambiguous in English; otherwise the code itself ("CHF"). */
+export function currencySign(code: string): string {
+  return ({ EUR: "€", GBP: "£", USD: "US$", JPY: "¥" } as Record<string, string>)[code] ?? code;
+}
+
+/** The sign as pages put it before an amount: "€1 200.00", "CHF 1 200.00". */
 export function currencySymbol(code: string): string {
-  return ({ EUR: "€", GBP: "£", USD: "US$", JPY: "¥" } as Record<string, string>)[code] ?? `${code} `;
+  const sign = currencySign(code);
+  return sign === code ? `${code} ` : sign;
 }

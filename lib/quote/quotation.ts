@@ -4,7 +4,6 @@
  * afresh from the current rows whenever it is read; an issued quotation keeps the object it was
  * issued with (its snapshot), and its documents are written from that alone.
  */
-import { z } from "zod";
 import { estimateScheme, parseScheme, type Estimate, type Rates } from "@/lib/estimate";
 import { toEstimatorScheme, type SchemeDocument, type Tuning } from "@/lib/spec/document";
 import type { Commercial } from "./commercial";
@@ -113,6 +112,3 @@ export function buildQuotation(input: QuotationInput): Quotation {
   }
   return { format: 1, ...input, estimate, totals };
 }
-
-/** What a stored snapshot must at least look like before a document is written from it. */
-export const storedQuotationSchema = z.looseObject({ format: z.literal(1), number: z.string(), estimate: z.looseObject({}), totals: z.looseObject({}) });
