@@ -36,7 +36,7 @@ const homes: Record<Role, { heading: string; lead: string; tiles: Tile[] }> = {
   workshop: {
     heading: "Workshop",
     lead: "What will be made, restored or revoiced, and the hours it takes.",
-    tiles: [{ title: "Projects", text: "Pipes, chests and hours by department.", href: "/projects" }],
+    tiles: [{ title: "Projects", text: "Pipes, chests and hours by department; the work list of each issued quotation.", href: "/projects" }],
   },
   client: {
     heading: "Your organ committee",
