@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { rateSets, rateSetVersions, users, type RateSet, type RateSetVersion } from "@/db/schema";
-import { ratesSchema, type Rates } from "@/lib/estimate";
+import { parseRates, ratesSchema, type Rates } from "@/lib/estimate";
 import { DEFAULT_RATES } from "@/lib/estimate/demo-rates";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
@@ -35,13 +35,16 @@ function today(): string {
   return new Date().toISOString().slice(0, 10);
 }
 
-/** Stored rates read through the estimator's schema, so a version saved before a new rate was added still reads (with the rate's default, if it has one). */
+/**
+ * Stored rates read through the estimator's schema. A version saved before the schema gained a rate
+ * reads with that rate's demo default filled in, however deep it sits (the estimator's own deep
+ * merge, parseRates), so a new norm never makes old rate sets unreadable.
+ */
 function readRates(raw: unknown): Rates {
   const r = ratesSchema.safeParse(raw);
   if (r.success) return r.data;
-  // A version saved before the schema gained a field: fill what is missing from the demo defaults, marked as such by their provenance.
-  const merged = ratesSchema.safeParse({ ...DEFAULT_RATES, ...(raw as object) });
-  if (merged.success) return merged.data;
+  const merged = parseRates(raw, DEFAULT_RATES);
+  if (merged.ok) return merged.rates;
   throw new AppError("internal", "A stored rate set no longer matches the estimator's rates; an administrator must re-save it.");
 }
 

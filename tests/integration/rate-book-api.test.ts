@@ -107,6 +107,18 @@ describe("the rate book", () => {
     expect(await versionCount(set.set.id)).toBe(1);
   });
 
+  it("reads a version stored before the estimator gained a rate, with that rate's demo default filled in", async () => {
+    const cookie = await signIn(await makeUser("estimator"));
+    const set = await newSet(cookie);
+    // As if saved by an older Stopwright: one nested norm and one top-level rate are not in the stored JSON.
+    await testDb().query("update rate_set_versions set rates = (rates #- '{norms,relocatePipe}') - 'cutUpFraction' where rate_set_id = $1", [set.set.id]);
+    const read = await api(`/api/rate-sets/${set.set.id}`, { cookie });
+    expect(read.status).toBe(200);
+    expect(read.json.current.rates.norms.relocatePipe).toBe(set.current.rates.norms.relocatePipe);
+    expect(read.json.current.rates.cutUpFraction).toBe(set.current.rates.cutUpFraction);
+    expect(read.json.current.rates.hourlyRate).toEqual(set.current.rates.hourlyRate);
+  });
+
   it("is for estimators and administrators only", async () => {
     const owner = await signIn(await makeUser("estimator"));
     const set = await newSet(owner);
