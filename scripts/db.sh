@@ -1,6 +1,8 @@
 #!/usr/bin/env bash
 # The project's own PostgreSQL cluster on 127.0.0.1 (Debian's packages; installed if missing).
 #   scripts/db.sh start|stop|status [--test]
+#   scripts/db.sh halt|resume|freeze|thaw --test   outages for the tests: stop and start again keeping
+#     the data, or stop every server process with SIGSTOP and let it go on (a database that hangs)
 # Without --test: the demo cluster in .data/pg on port 54329 (kept between runs).
 # With --test: a throwaway cluster in .data/pg-test on port 54339 (fsync off, wiped on start).
 set -euo pipefail
@@ -40,6 +42,32 @@ resolve_data_dir() {
 
 running() { [ -f "$data/postmaster.pid" ] && as_owner "$bin/pg_ctl" -D "$data" status >/dev/null 2>&1; }
 
+start_server() {
+  local opts="-c listen_addresses=127.0.0.1 -p $port -c unix_socket_directories=''"
+  [ "$mode" = test ] && opts="$opts -c fsync=off -c synchronous_commit=off -c full_page_writes=off"
+  as_owner "$bin/pg_ctl" -D "$data" -w -l "$data/server.log" -o "$opts" start >/dev/null
+}
+
+# The postmaster and its children (backends and background workers).
+server_pids() {
+  local main
+  main=$(head -n 1 "$data/postmaster.pid")
+  echo "$main"
+  ps -o pid= --ppid "$main"
+}
+
+outage() {
+  [ "$mode" = test ] || { echo "error: $cmd is only for the test cluster (--test)" >&2; exit 2; }
+  ensure_postgres
+  resolve_data_dir
+  case "$cmd" in
+    halt) as_owner "$bin/pg_ctl" -D "$data" -w -m immediate stop >/dev/null; echo "database halted (data kept)" ;;
+    resume) running || start_server; echo "database running on 127.0.0.1:$port" ;;
+    freeze) running && kill -STOP $(server_pids); echo "database frozen" ;;
+    thaw) if [ -f "$data/postmaster.pid" ]; then kill -CONT $(server_pids) 2>/dev/null || true; fi; echo "database thawed" ;;
+  esac
+}
+
 start() {
   ensure_postgres
   resolve_data_dir
@@ -51,9 +79,7 @@ start() {
     chmod 700 "$data"
     as_owner "$bin/initdb" -D "$data" -U stopwright --auth=trust -E UTF8 --locale=C.UTF-8 >/dev/null
   fi
-  local opts="-c listen_addresses=127.0.0.1 -p $port -c unix_socket_directories=''"
-  [ "$mode" = test ] && opts="$opts -c fsync=off -c synchronous_commit=off -c full_page_writes=off"
-  as_owner "$bin/pg_ctl" -D "$data" -w -l "$data/server.log" -o "$opts" start >/dev/null
+  start_server
   if ! "$bin/psql" -h 127.0.0.1 -p "$port" -U stopwright -d postgres -tAc "select 1 from pg_database where datname='stopwright'" | grep -q 1; then
     "$bin/createdb" -h 127.0.0.1 -p "$port" -U stopwright stopwright
   fi
@@ -77,6 +103,7 @@ case "$cmd" in
   start) start ;;
   stop) stop ;;
   status) status ;;
+  halt|resume|freeze|thaw) outage ;;
   url) echo "postgres://stopwright@127.0.0.1:$port/stopwright" ;;
-  *) echo "usage: scripts/db.sh start|stop|status|url [--test]" >&2; exit 2 ;;
+  *) echo "usage: scripts/db.sh start|stop|status|url [--test] | halt|resume|freeze|thaw --test" >&2; exit 2 ;;
 esac

@@ -22,7 +22,8 @@ describe("GET /api/health", () => {
     expect(res.status).toBe(503);
     const body = await res.json();
     expect(body).toMatchObject({ status: "unavailable", database: "unreachable" });
-    expect(body.reason).toBe("The database did not answer.");
+    expect(body.reason).toBe("The database is not answering; try again shortly.");
+    expect(res.headers.get("retry-after")).toBe("5");
     const { pool } = await import("@/db/client");
     await pool.end();
   });
