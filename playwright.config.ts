@@ -5,7 +5,7 @@ const baseURL = process.env.E2E_BASE_URL ?? "http://127.0.0.1:3100";
 
 export default defineConfig({
   testDir: "tests/e2e",
-  testMatch: /.*\.e2e\.ts$/,
+  testMatch: /\.e2e\.ts$/,
   fullyParallel: false,
   workers: 1,
   retries: 0,

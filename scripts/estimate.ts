@@ -7,6 +7,7 @@
 import { DEFAULT_RATES } from "../lib/estimate/demo-rates";
 import { readFileSync } from "node:fs";
 import { estimateScheme, parseSchemeFile, type Estimate } from "@/lib/estimate";
+import { groupThousands } from "@/lib/spec/digits";
 
 const USAGE = "usage: npm run estimate -- FILE.json [--summary]";
 
@@ -18,7 +19,7 @@ function pad(s: string | number, n: number, left = false): string {
 function money(a: string): string {
   const [whole, cents] = a.split(".");
   const neg = whole.startsWith("-");
-  const digits = (neg ? whole.slice(1) : whole).replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+  const digits = groupThousands(neg ? whole.slice(1) : whole, ",");
   return `${neg ? "-" : ""}${digits}.${cents}`;
 }
 

@@ -5,6 +5,7 @@ import { departmentLabels, departments } from "@/lib/estimate";
 import { materialLabels } from "./format";
 import { chestWords, fitState } from "./chest-words";
 import { formatNumber } from "./format";
+import { groupThousands } from "@/lib/spec/digits";
 import type { Figures } from "./use-figures";
 
 /**
@@ -13,7 +14,7 @@ import type { Figures } from "./use-figures";
  */
 function money(amount: string, currency: string): string {
   const [whole, cents = "00"] = amount.replace(/^-/, "").split(".");
-  const grouped = whole!.replace(/\B(?=(\d{3})+(?!\d))/g, "\u202f");
+  const grouped = groupThousands(whole!, "\u202f");
   return `${amount.startsWith("-") ? "−" : ""}${currency === "EUR" ? "€" : `${currency} `}${grouped}.${cents}`;
 }
 

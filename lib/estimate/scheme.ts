@@ -3,11 +3,17 @@
  * (docs/scheme-format.md), the server and the command line. Pure zod, no I/O.
  */
 import { z } from "zod";
-import { MSG_NOT_FOOTAGE, parseFootage } from "./pitch";
+import { MAX_FOOTAGE_TEXT, MSG_NOT_FOOTAGE, parseFootage } from "./pitch";
+
+/** Ids of divisions, stops, couplers and tremulants: short words chosen by the editor ("gt-od"). */
+const MAX_ID = 64;
+/** An id; the length is checked first and stops the check, so no longer text reaches a pattern or an index. */
+const idSchema = z.string().min(1).max(MAX_ID, { abort: true, error: `an id of at most ${MAX_ID} characters` });
 
 /** Helmholtz note names as organ builders write them: C, C#, c, c', c'''' (Wikipedia, "Helmholtz pitch notation"). */
 export const noteName = z
   .string()
+  .max(8, { abort: true, error: "a note in Helmholtz notation, e.g. C, c, c', g', c''''" })
   // Capitals repeat for the lower octaves (C, CC, CCC) and take no primes; small letters take 0–5 primes.
   .regex(
     /^(?:([A-G])\1{0,2}(?:#|b|♯|♭)?|[a-g](?:#|b|♯|♭)?(?:'{1,5}|′{1,5})?)$/,
@@ -22,6 +28,7 @@ export const compassSchema = z.object({ low: noteName, high: noteName });
  */
 export const footageSchema = z
   .union([z.string().min(1), z.number().positive()])
+  .refine((f) => typeof f !== "string" || f.length <= MAX_FOOTAGE_TEXT, { abort: true, error: `is too long for a footage (at most ${MAX_FOOTAGE_TEXT} characters, e.g. 10 2/3)` })
   .refine((f) => parseFootage(f) !== null, { error: (issue) => `"${String(issue.input)}" ${MSG_NOT_FOOTAGE}` });
 
 export const families = ["principal", "flute", "string", "reed", "hybrid", "mutation", "mixture"] as const;
@@ -44,10 +51,10 @@ export const scaleSchema = z.object({
 });
 
 /** One break range of a mixture: from this note upward, the footage of each rank. */
-export const mixtureBreakSchema = z.object({ from: noteName, footages: z.array(footageSchema).min(1) });
+export const mixtureBreakSchema = z.object({ from: noteName, footages: z.array(footageSchema).min(1).max(12) });
 
 export const stopSchema = z.object({
-  id: z.string().min(1),
+  id: idSchema,
   name: z.string().min(1).max(80),
   footage: footageSchema,
   ranks: z.number().int().min(1).max(12).default(1),
@@ -61,7 +68,7 @@ export const stopSchema = z.object({
   compass: compassSchema.optional(),
   treatment: z.enum(treatments).default("new"),
   /** For extension and borrowed: the id of the stop whose rank it draws on. */
-  source: z.string().optional(),
+  source: idSchema.optional(),
   /** The lowest N pipes stand on an offset chest, off the main chest. */
   offsetBassPipes: z.number().int().min(0).max(32).default(0),
 });
@@ -69,7 +76,7 @@ export const stopSchema = z.object({
 export const windPressureSchema = z.object({ value: z.number().positive(), unit: z.enum(["mm", "in"]).default("mm") });
 
 export const divisionSchema = z.object({
-  id: z.string().min(1),
+  id: idSchema,
   name: z.string().min(1).max(60),
   keyboard: z.enum(["manual", "pedal"]),
   compass: compassSchema,
@@ -91,10 +98,10 @@ export const divisionSchema = z.object({
 });
 
 export const couplerSchema = z.object({
-  id: z.string().min(1),
+  id: idSchema,
   /** The division whose keys are coupled (e.g. the Swell in "Swell to Great"). */
-  from: z.string().min(1),
-  to: z.string().min(1),
+  from: idSchema,
+  to: idSchema,
   /** 0 unison, -1 sub-octave (16′), +1 octave (4′). */
   octave: z.union([z.literal(-1), z.literal(0), z.literal(1)]).default(0),
 });
@@ -102,8 +109,8 @@ export const couplerSchema = z.object({
 export const accessoriesSchema = z.object({
   /** What happens to the console: made new, restored, or kept as it is. */
   consoleWork: z.enum(["new", "restored", "retained"]).default("new"),
-  couplers: z.array(couplerSchema).default([]),
-  tremulants: z.array(z.object({ id: z.string().min(1), division: z.string().min(1) })).default([]),
+  couplers: z.array(couplerSchema).max(128).default([]),
+  tremulants: z.array(z.object({ id: idSchema, division: idSchema })).max(32).default([]),
   combination: z
     .object({
       memoryLevels: z.number().int().min(0).max(10000).default(0),

@@ -1,27 +1,22 @@
 import "server-only";
-import { getServerSession } from "next-auth";
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import type { z } from "zod";
-import { authOptions } from "@/app/(auth)/auth";
-import { getUserById } from "@/db/queries/users";
 import { can, roleLabels, type Permission, type Role } from "@/lib/roles";
 import { appOrigin } from "@/lib/env";
 import { AppError, errorResponse, invalid, toErrorBody, type FieldErrors } from "./errors";
+import { assertStorable, readJsonBody } from "./input";
+import { currentSession } from "./session";
 import { assertJsonBody, assertSameOrigin, foreignOriginProblem } from "./request-checks";
 
 export type SessionUser = { id: string; email: string; name: string; role: Role };
 
 /**
- * The signed-in user as the database knows them now: a role changed or an account disabled
- * by an administrator takes effect on the next request, not when the session token expires.
+ * The signed-in user as the database knows them now: a session revoked by signing out, by
+ * disabling the account or by a change of role ends on the next request, not when its token expires.
  */
 export async function currentUser(): Promise<SessionUser | null> {
-  const session = await getServerSession(authOptions);
-  if (!session?.user?.id) return null;
-  const user = await getUserById({ id: session.user.id });
-  if (!user || user.disabled) return null;
-  return { id: user.id, email: user.email, name: user.name, role: user.role };
+  return (await currentSession())?.user ?? null;
 }
 
 export async function requireUser(permission?: Permission): Promise<SessionUser> {
@@ -41,40 +36,40 @@ export async function requirePageUser(permission?: Permission, callbackUrl = "/"
   return user;
 }
 
-async function readJson(req: Request): Promise<unknown> {
-  const text = await req.text();
-  if (!text) return {};
-  try {
-    return JSON.parse(text);
-  } catch {
-    throw new AppError("bad_request", "The request body is not valid JSON.");
-  }
+type RouteArgs<B, P> = { user: SessionUser; body: B; params: P; req: Request; url: URL };
+type Output<S, Fallback> = S extends z.ZodType ? z.output<S> : Fallback;
+
+/** A path parameter that fails its schema names nothing: 404 with the schema's words. */
+function parseParams<P extends z.ZodType>(schema: P, raw: unknown): z.output<P> {
+  const parsed = schema.safeParse(raw ?? {});
+  if (!parsed.success) throw new AppError("not_found", parsed.error.issues[0]?.message ?? "No such page.");
+  return parsed.data;
 }
 
-type RouteArgs<B, P> = { user: SessionUser; body: B; params: P; req: Request; url: URL };
-
 /**
- * Wraps a route handler: refuse changes from other sites, authenticate, check the role, parse the
- * JSON body with zod (422 with every field path), then act. Errors become JSON with a typed code; no stack trace reaches a client.
- * Authentication comes before parsing so an anonymous caller learns nothing about the API.
+ * Wraps a route handler: refuse changes from other sites, authenticate, check the role, validate
+ * the path parameters (404), read the JSON body within its size limit and parse it with zod (422
+ * with every field path), then act. Errors become JSON with a typed code; no stack trace reaches a
+ * client. Authentication comes before parsing so an anonymous caller learns nothing about the API.
  */
-export function route<S extends z.ZodType | undefined = undefined, P = Record<string, string>>(
-  opts: { permission: Permission; body?: S },
-  fn: (args: RouteArgs<S extends z.ZodType ? z.output<S> : undefined, P>) => Promise<unknown>,
+export function route<S extends z.ZodType | undefined = undefined, PS extends z.ZodType | undefined = undefined>(
+  opts: { permission: Permission; body?: S; params?: PS; bodyLimit?: number },
+  fn: (args: RouteArgs<Output<S, undefined>, Output<PS, Record<string, string>>>) => Promise<unknown>,
 ) {
-  return async (req: Request, ctx: { params: Promise<P> }): Promise<Response> => {
+  return async (req: Request, ctx: { params: Promise<unknown> }): Promise<Response> => {
     try {
       assertSameOrigin(req, appOrigin());
       const user = await requireUser(opts.permission);
+      const rawParams = (await ctx?.params) ?? {};
+      const params = opts.params ? parseParams(opts.params, rawParams) : rawParams;
       let body: unknown = undefined;
       if (opts.body) {
         assertJsonBody(req);
-        const parsed = opts.body.safeParse(await readJson(req));
+        const parsed = opts.body.safeParse(await readJsonBody(req, opts.bodyLimit));
         if (!parsed.success) throw invalid(parsed.error);
         body = parsed.data;
       }
-      const params = ((await ctx?.params) ?? {}) as P;
-      const result = await fn({ user, body: body as never, params, req, url: new URL(req.url) });
+      const result = await fn({ user, body: body as never, params: params as never, req, url: new URL(req.url) });
       if (result instanceof Response) return result;
       return Response.json(result ?? { ok: true });
     } catch (err) {
@@ -114,6 +109,7 @@ export function action<S extends z.ZodType, T>(
       const problem = foreignOriginProblem(await headers(), appOrigin());
       if (problem) throw new AppError("forbidden", problem);
       const user = await requireUser(opts.permission);
+      assertStorable(raw);
       const parsed = opts.input.safeParse(raw);
       if (!parsed.success) throw invalid(parsed.error);
       return { ok: true, data: await fn({ user, input: parsed.data }) };

@@ -1,8 +1,32 @@
-import { AppError } from "./errors";
+/**
+ * Path parameters, validated with zod before anything reads them. The framework has already
+ * decoded them ("%201" arrives as " 1"), so only the canonical spelling passes: a lower- or
+ * upper-case UUID, or a revision number written in plain decimal without sign, spaces or leading
+ * zeros, within PostgreSQL's integer (2^31 − 1). Anything else names nothing: 404.
+ */
+import { z } from "zod";
 
-/** A revision number from the URL; anything else is a page that does not exist. */
-export function parseVersion(raw: string): number {
-  const version = Number(raw);
-  if (!Number.isInteger(version) || version < 1) throw new AppError("not_found", `"${raw}" is not a version number.`);
-  return version;
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+export const MAX_INT4 = 2_147_483_647;
+
+/** Quoted back in a message, shortened so a 1 MiB path does not come back as a 1 MiB answer. */
+export function quoted(raw: string): string {
+  return JSON.stringify(raw.length > 40 ? `${raw.slice(0, 40)}…` : raw);
 }
+
+export function idParam(what: string) {
+  return z.string().refine((v) => v.length === 36 && UUID.test(v), { error: (issue) => `${quoted(String(issue.input))} is not the id of any ${what}.` });
+}
+
+export const versionParam = z
+  .string()
+  .refine((v) => v.length <= 10 && /^[1-9][0-9]*$/.test(v) && Number(v) <= MAX_INT4, {
+    error: (issue) => `${quoted(String(issue.input))} is not a version number (1, 2, 3 …).`,
+  })
+  .transform(Number);
+
+export const projectParams = z.object({ projectId: idParam("project") });
+export const schemeParams = z.object({ schemeId: idParam("scheme") });
+export const revisionParams = z.object({ schemeId: idParam("scheme"), version: versionParam });
+export const userParams = z.object({ userId: idParam("user") });
+export const memberParams = z.object({ projectId: idParam("project"), userId: idParam("member") });

@@ -11,7 +11,7 @@ export type SchemeStatus = (typeof schemeStatuses)[number];
 
 export const schemeDocumentSchema = z.object({
   name: z.string().trim().min(1, "Give the scheme a name.").max(120),
-  description: z.string().max(4000).default(""),
+  description: z.string().max(4000, "Keep the description under 4000 characters.").default(""),
   divisions: z.array(divisionSchema).max(16, "At most 16 divisions.").default([]),
   accessories: accessoriesSchema.prefault({}),
 });
@@ -20,9 +20,12 @@ export type SchemeDocument = z.output<typeof schemeDocumentSchema>;
 export type DocDivision = SchemeDocument["divisions"][number];
 export type DocStop = DocDivision["stops"][number];
 
+/** A scheme version: a positive whole number within PostgreSQL's integer column (2^31 − 1). */
+export const revisionNumber = z.number({ error: "A version is a whole number." }).int("A version is a whole number.").min(1, "Versions start at 1.").max(2_147_483_647, "No scheme has that many versions.");
+
 export const saveSchemeSchema = z.object({
   /** The version the edit was based on; a stale one is refused with 409. */
-  version: z.number().int().min(1),
+  version: revisionNumber,
   document: schemeDocumentSchema,
   /** Optional words for the revision list ("moved the Trompette to the Swell"). */
   note: z.string().max(200).optional(),
@@ -66,4 +69,4 @@ export const duplicateSchemeSchema = z.object({ name: z.string().trim().min(1, "
 export const schemeMetaSchema = z
   .object({ status: z.enum(schemeStatuses).optional(), sharedWithClient: z.boolean().optional() })
   .refine((v) => v.status !== undefined || v.sharedWithClient !== undefined, "Nothing to change.");
-export const restoreSchema = z.object({ version: z.number().int().min(1) });
+export const restoreSchema = z.object({ version: revisionNumber });

@@ -1,5 +1,6 @@
 /** Project shapes shared by forms, the API and the pages. Pure. */
 import { z } from "zod";
+import { emailField } from "@/lib/validation/text";
 import type { SchemeRead } from "./document";
 
 export const projectStatuses = ["enquiry", "design", "tender", "contracted", "workshop", "site", "complete"] as const;
@@ -14,6 +15,16 @@ export const projectStatusLabels: Record<ProjectStatus, string> = {
   complete: "Complete",
 };
 
+/**
+ * A completion date: a real calendar day (zod refuses 2027-02-30) in years a job can have.
+ * PostgreSQL has no year 0 and the trade no jobs before 1900, so both ends are bounded.
+ */
+export const targetDateSchema = z
+  .string()
+  .max(10, { abort: true, error: "Use a date like 2028-09-30." })
+  .pipe(z.iso.date("Use a date like 2028-09-30."))
+  .refine((d) => d >= "1900-01-01" && d <= "2199-12-31", "Use a date between 1900 and 2199.");
+
 export const projectInputSchema = z.object({
   name: z.string().trim().min(1, "Give the project a name.").max(160),
   clientName: z.string().trim().min(1, "Name the client (church, school, hall…).").max(160),
@@ -22,10 +33,10 @@ export const projectInputSchema = z.object({
   instrument: z.string().trim().max(300).default(""),
   status: z.enum(projectStatuses).default("enquiry"),
   /** ISO date (YYYY-MM-DD) or null. */
-  targetDate: z.iso.date("Use a date like 2028-09-30.").nullable().default(null),
+  targetDate: targetDateSchema.nullable().default(null),
   pitchHz: z.number({ error: "Pitch is a number in Hz." }).min(380, "Pitch below 380 Hz is not supported.").max(480, "Pitch above 480 Hz is not supported.").default(440),
   temperatureC: z.number({ error: "Temperature is a number in °C." }).min(-10).max(40).default(18),
-  notes: z.string().max(4000).default(""),
+  notes: z.string().max(4000, "Keep the notes under 4000 characters.").default(""),
 });
 export type ProjectInput = z.input<typeof projectInputSchema>;
 export const projectPatchSchema = projectInputSchema.partial();
@@ -55,4 +66,4 @@ export type SchemeSummary = Omit<SchemeRead, "projectId" | "updatedByName" | "tu
 };
 
 export const archiveSchema = z.object({ archived: z.boolean() });
-export const memberSchema = z.object({ email: z.string().trim().toLowerCase().email("Enter a valid e-mail address.") });
+export const memberSchema = z.object({ email: emailField });

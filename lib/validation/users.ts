@@ -1,10 +1,11 @@
 import { z } from "zod";
 import { roles } from "@/lib/roles";
+import { emailField } from "./text";
 
 /** One schema for the admin form (react-hook-form) and the server. */
 export const newUserSchema = z.object({
   name: z.string().trim().min(1, "Enter the person's name.").max(120, "Keep the name under 120 characters."),
-  email: z.string().trim().toLowerCase().email("Enter a valid e-mail address."),
+  email: emailField,
   role: z.enum(roles, { error: "Choose a role." }),
   password: z.string().min(10, "Use at least 10 characters.").max(200, "Keep the password under 200 characters."),
 });
@@ -20,8 +21,8 @@ export const updateUserSchema = z
 export type UpdateUserInput = z.infer<typeof updateUserSchema>;
 
 export const signInSchema = z.object({
-  email: z.string().trim().toLowerCase().email("Enter a valid e-mail address."),
-  password: z.string().min(1, "Enter your password."),
+  email: emailField,
+  password: z.string().min(1, "Enter your password.").max(200, "Keep the password under 200 characters."),
 });
 
 /** Messages the sign-in form shows; next-auth passes a thrown error's message through as `error`. */

@@ -1,14 +1,13 @@
 import { getProjectForUser, updateProject } from "@/db/queries/projects";
 import { route } from "@/lib/server/guard";
+import { projectParams } from "@/lib/server/params";
 import { projectPatchSchema } from "@/lib/spec/projects";
 
-type Params = { projectId: string };
-
-export const GET = route<undefined, Params>({ permission: "projects:read" }, async ({ user, params }) =>
+export const GET = route({ permission: "projects:read", params: projectParams }, async ({ user, params }) =>
   getProjectForUser({ user, projectId: params.projectId }),
 );
 
-export const PATCH = route<typeof projectPatchSchema, Params>({ permission: "projects:edit", body: projectPatchSchema }, async ({ user, params, body }) => {
+export const PATCH = route({ permission: "projects:edit", params: projectParams, body: projectPatchSchema }, async ({ user, params, body }) => {
   const { project } = await updateProject({ user, projectId: params.projectId, patch: body });
   return { project };
 });

@@ -1,7 +1,7 @@
 import { getRevision } from "@/db/queries/schemes";
-import { parseVersion } from "@/lib/server/params";
 import { route } from "@/lib/server/guard";
+import { revisionParams } from "@/lib/server/params";
 
-export const GET = route<undefined, { schemeId: string; version: string }>({ permission: "revisions:read" }, async ({ user, params }) => ({
-  revision: await getRevision({ user, schemeId: params.schemeId, version: parseVersion(params.version) }),
+export const GET = route({ permission: "revisions:read", params: revisionParams }, async ({ user, params }) => ({
+  revision: await getRevision({ user, schemeId: params.schemeId, version: params.version }),
 }));
