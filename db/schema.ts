@@ -1,7 +1,7 @@
 import { sql } from "drizzle-orm";
 import {
-  boolean, check, customType, date, doublePrecision, foreignKey, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp,
-  uniqueIndex, uuid, type AnyPgColumn,
+  bigint, boolean, check, customType, date, doublePrecision, foreignKey, index, integer, jsonb, pgEnum, pgTable, primaryKey, text, timestamp,
+  uniqueIndex, uuid, varchar, type AnyPgColumn,
 } from "drizzle-orm/pg-core";
 import { roles } from "../lib/roles";
 import { schemeStatuses } from "../lib/spec/document";
@@ -48,6 +48,33 @@ export const users = pgTable(
     check("users_email_lowercase", sql`${t.email} = lower(${t.email})`),
   ],
 );
+
+/**
+ * One row per sign-in. The session cookie names its row; signing out, disabling the account or
+ * changing its role revokes the row, so a copied cookie stops working at once, not when it expires.
+ */
+export const authSessions = pgTable(
+  "auth_sessions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id").notNull().references(() => users.id, { onDelete: "cascade" }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  },
+  (t) => [index("auth_sessions_user_idx").on(t.userId)],
+);
+
+/**
+ * Failed sign-in counters (rate-limiter-flexible's PostgreSQL store, which writes rows by column
+ * position: key, points, expire). Keys are hashes, so no e-mail or address is kept in clear.
+ */
+export const signInThrottle = pgTable("sign_in_throttle", {
+  key: varchar("key", { length: 255 }).primaryKey(),
+  points: integer("points").notNull().default(0),
+  /** Epoch milliseconds. */
+  expire: bigint("expire", { mode: "number" }),
+});
 
 export type Firm = typeof firms.$inferSelect;
 export type User = typeof users.$inferSelect;

@@ -7,6 +7,8 @@ declare module "next-auth" {
   interface User {
     id: string;
     role: Role;
+    /** The auth_sessions row of this sign-in. */
+    sid: string;
   }
 }
 
@@ -14,5 +16,7 @@ declare module "next-auth/jwt" {
   interface JWT {
     id: string;
     role: Role;
+    /** The auth_sessions row of this sign-in; revoked rows end the session. */
+    sid?: string;
   }
 }

@@ -4,6 +4,7 @@ import bcrypt from "bcryptjs";
 import { db } from "@/db/client";
 import { users, type User } from "@/db/schema";
 import { AppError } from "@/lib/server/errors";
+import { revokeSessionsOfUser } from "./sessions";
 import type { NewUserInput, UpdateUserInput } from "@/lib/validation/users";
 
 export type PublicUser = Omit<User, "passwordHash">;
@@ -68,6 +69,8 @@ export async function updateUser({ id, input, actingUserId }: { id: string; inpu
       .set({ role: nextRole, disabled: nextDisabled, name: input.name?.trim() ?? current.name, updatedAt: new Date() })
       .where(eq(users.id, id))
       .returning(publicColumns);
+    // A disabled account, or one whose role changed, is signed out everywhere at once.
+    if (nextDisabled !== current.disabled || nextRole !== current.role) await revokeSessionsOfUser({ userId: id, tx });
     return row!;
   });
 }

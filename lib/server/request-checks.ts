@@ -45,3 +45,16 @@ export function assertJsonBody(req: Request): void {
     throw new AppError("unsupported_media_type", "Send the request body as JSON, with the header Content-Type: application/json.");
   }
 }
+
+/**
+ * The address a request came from, as the nearest proxy reported it: the last entry of
+ * X-Forwarded-For. In production `next start` listens on loopback behind a TLS proxy that appends
+ * the client's address (README, "Running in production"); without a proxy, the framework fills the
+ * header with the socket's address. Shortened, since it only ever becomes a hashed counter key.
+ */
+export function clientAddress(headers: Headers | Record<string, string | string[] | undefined>): string {
+  const raw = headers instanceof Headers ? headers.get("x-forwarded-for") : headers["x-forwarded-for"];
+  const value = Array.isArray(raw) ? raw.join(",") : raw;
+  const last = value?.split(",").at(-1)?.trim();
+  return last ? last.slice(0, 64) : "unknown";
+}

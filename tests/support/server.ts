@@ -67,3 +67,36 @@ export async function api(path: string, init: { method?: string; cookie?: string
   // eslint-disable-next-line @typescript-eslint/no-explicit-any
   return { status: res.status, json: json as Record<string, any>, text };
 }
+
+/** A browser's way of signing out: the CSRF token for this cookie, then the sign-out form. */
+export async function signOut(cookie: string): Promise<Response> {
+  const csrf = await fetch(`${baseUrl}/api/auth/csrf`, { headers: { cookie } });
+  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
+  return fetch(`${baseUrl}/api/auth/signout`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie },
+    body: new URLSearchParams({ csrfToken, callbackUrl: "/sign-in", json: "true" }),
+  });
+}
+
+/**
+ * One sign-in attempt as the sign-in form makes it, from the network address given (the test
+ * server sits behind no proxy, so X-Forwarded-For is what the app reads). Returns the session
+ * cookie on success, or the message the form would show.
+ */
+export async function attemptSignIn(email: string, password: string, address = "127.0.0.1"): Promise<{ cookie: string | null; error: string | null }> {
+  const csrfRes = await fetch(`${baseUrl}/api/auth/csrf`);
+  const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
+  const csrfCookie = csrfRes.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
+  const res = await fetch(`${baseUrl}/api/auth/callback/credentials`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie: csrfCookie, "x-forwarded-for": address },
+    body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
+  });
+  const session = res.headers.getSetCookie().map((c) => c.split(";")[0]!).find((c) => c.includes("session-token="));
+  if (session) return { cookie: `${csrfCookie}; ${session}`, error: null };
+  const { url } = (await res.json()) as { url: string };
+  return { cookie: null, error: new URL(url).searchParams.get("error") };
+}
