@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import localFont from "next/font/local";
+import { connection } from "next/server";
 import type { ReactNode } from "react";
 import { Providers } from "./providers";
 import "./globals.css";
@@ -21,7 +22,9 @@ export const metadata: Metadata = {
   icons: { icon: "/favicon.svg" },
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Every page is rendered per request, so each gets its own script nonce (see proxy.ts).
+  await connection();
   return (
     <html lang="en-GB" className={`${inter.variable} ${serif.variable}`}>
       <body className="min-h-screen bg-paper text-ink antialiased">

@@ -204,6 +204,11 @@ export function storageSettings() {
   };
 }
 
+/** `next dev`: looser rules only where the framework's development tools need them (CSP eval). */
+export function isDevelopment(): boolean {
+  return env().NODE_ENV === "development";
+}
+
 /** The app's own origin (scheme, host and port), against which state-changing requests are checked. */
 export function appOrigin(): string {
   return new URL(env().NEXTAUTH_URL).origin;
