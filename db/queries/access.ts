@@ -1,8 +1,8 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import type { Store } from "@/db/scheme-store";
-import { projectMembers, projects, schemes, type Project, type Scheme } from "@/db/schema";
+import { projectMembers, projects, schemes, users, type Project, type Scheme } from "@/db/schema";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
 
@@ -39,9 +39,55 @@ export async function loadSchemeFor({ user, schemeId, tx = db, lock = false }: {
   return { scheme, project };
 }
 
-/** An archived project is a record: its schemes are read, not changed, until it is brought back. */
-export function assertOpen(project: Project): void {
-  if (project.archivedAt) throw new AppError("conflict", "This project is archived; bring it back from the archive to change its schemes.");
+/** A scheme's row with what a read needs of its project and author, without its document. */
+export type SchemeHead = Pick<Scheme, "id" | "projectId" | "name" | "description" | "status" | "sharedWithClient" | "version" | "copiedFromId" | "updatedAt"> & {
+  updatedByName: string | null;
+  pitchHz: number;
+  temperatureC: number;
+};
+
+/**
+ * The same rule as loadSchemeFor, in one query, for the reads that run most often (the editor's
+ * scheme and its estimate): the scheme, its project's tuning and its author's name, and for a
+ * client whether they are a member of the project.
+ */
+export async function loadSchemeHeadFor({ user, schemeId }: { user: SessionUser; schemeId: string }): Promise<SchemeHead> {
+  if (!isUuid(schemeId)) throw new AppError("not_found", "No such scheme.");
+  const [row] = await db
+    .select({
+      id: schemes.id,
+      projectId: schemes.projectId,
+      name: schemes.name,
+      description: schemes.description,
+      status: schemes.status,
+      sharedWithClient: schemes.sharedWithClient,
+      version: schemes.version,
+      copiedFromId: schemes.copiedFromId,
+      updatedAt: schemes.updatedAt,
+      updatedByName: users.name,
+      pitchHz: projects.pitchHz,
+      temperatureC: projects.temperatureC,
+      member:
+        user.role === "client"
+          ? sql<boolean>`exists (select 1 from ${projectMembers} where ${projectMembers.projectId} = ${projects.id} and ${projectMembers.userId} = ${user.id})`
+          : sql<boolean>`true`,
+    })
+    .from(schemes)
+    .innerJoin(projects, eq(projects.id, schemes.projectId))
+    .leftJoin(users, eq(users.id, schemes.updatedById))
+    .where(eq(schemes.id, schemeId))
+    .limit(1);
+  if (!row || (user.role === "client" && !(row.member && row.sharedWithClient))) throw new AppError("not_found", "No such scheme.");
+  const { member: _member, ...head } = row;
+  return head;
+}
+
+/**
+ * An archived project is a record: it and its schemes are read, not changed, until it is brought
+ * back. (Removing a member stays possible, so access can always be taken away.)
+ */
+export function assertOpen(project: Project, toDo = "change its schemes"): void {
+  if (project.archivedAt) throw new AppError("conflict", `This project is archived; bring it back from the archive to ${toDo}.`);
 }
 
 export function isUuid(value: string): boolean {

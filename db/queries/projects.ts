@@ -7,7 +7,7 @@ import type { SessionUser } from "@/lib/server/guard";
 import type { ProjectRead, ProjectSummary, SchemeSummary } from "@/lib/spec/projects";
 import { projectInputSchema, type projectPatchSchema } from "@/lib/spec/projects";
 import type { z } from "zod";
-import { loadProjectFor } from "./access";
+import { assertOpen, loadProjectFor } from "./access";
 
 type ProjectInput = z.output<typeof projectInputSchema>;
 type ProjectPatch = z.output<typeof projectPatchSchema>;
@@ -108,7 +108,7 @@ export async function createProject({ user, input }: { user: SessionUser; input:
 }
 
 export async function updateProject({ user, projectId, patch }: { user: SessionUser; projectId: string; patch: ProjectPatch }) {
-  await loadProjectFor({ user, projectId });
+  assertOpen(await loadProjectFor({ user, projectId }), "change its details");
   const [row] = await db.update(projects).set({ ...patch, updatedAt: new Date() }).where(eq(projects.id, projectId)).returning();
   return readProject(row!, user);
 }
@@ -125,6 +125,7 @@ export async function setProjectArchived({ user, projectId, archived }: { user: 
 
 export async function addProjectMember({ user, projectId, email }: { user: SessionUser; projectId: string; email: string }) {
   const project = await loadProjectFor({ user, projectId });
+  assertOpen(project, "add members");
   const [member] = await db.select({ id: users.id, disabled: users.disabled }).from(users).where(eq(users.email, email.trim().toLowerCase())).limit(1);
   if (!member) {
     throw new AppError("invalid", `No user has the e-mail ${email}. An administrator can add them first.`, { email: [`No user has the e-mail ${email}.`] });
