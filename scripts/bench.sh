@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
-# npm run bench: the estimator's benchmark, then the editor's (a production build on a throwaway
-# database with the demo data: scheme API reads, and drag-and-drop moves to a figures update).
+# npm run bench: the estimator's benchmark, then the server's (a production build on a throwaway
+# database with the demo data): speed under load with 32 connections against the floor of
+# /api/health, scheme API reads, and drag-and-drop moves to a figures update.
 set -uo pipefail
 cd "$(dirname "$0")/.."
 source scripts/setup.sh
@@ -12,7 +13,7 @@ ensure_node_modules || exit 1
 echo "── estimator"
 node_modules/.bin/tsx scripts/bench.ts || exit 1
 
-echo "── editor"
+echo "── server"
 export PG_TEST_PORT=${BENCH_PG_PORT:-54349} PG_TEST_NAME=pg-bench
 port=${BENCH_APP_PORT:-3200}
 export DATABASE_URL=$(bash scripts/db.sh url --test)
@@ -42,4 +43,9 @@ start_fake_smtp "$SMTP_PORT" .data/bench-mail > /dev/null || exit 1
 node_modules/.bin/next start -H 127.0.0.1 -p "$port" > /dev/null 2>&1 &
 server_pid=$!
 for _ in $(seq 1 60); do curl -sf "$NEXTAUTH_URL/api/health" >/dev/null && break; sleep 0.5; done
-node_modules/.bin/tsx scripts/bench-editor.ts
+echo "── under load"
+BENCH_SERVER_PID=$server_pid node_modules/.bin/tsx scripts/bench-load.ts
+load_rc=$?
+echo "── editor"
+node_modules/.bin/tsx scripts/bench-editor.ts || exit 1
+exit $load_rc

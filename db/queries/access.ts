@@ -51,32 +51,34 @@ export type SchemeHead = Pick<Scheme, "id" | "projectId" | "name" | "description
  * scheme and its estimate): the scheme, its project's tuning and its author's name, and for a
  * client whether they are a member of the project.
  */
+// Prepared once (it runs on every scheme and estimate read); the membership test is cheap and only
+// consulted for clients.
+const schemeHeadQuery = db
+  .select({
+    id: schemes.id,
+    projectId: schemes.projectId,
+    name: schemes.name,
+    description: schemes.description,
+    status: schemes.status,
+    sharedWithClient: schemes.sharedWithClient,
+    version: schemes.version,
+    copiedFromId: schemes.copiedFromId,
+    updatedAt: schemes.updatedAt,
+    updatedByName: users.name,
+    pitchHz: projects.pitchHz,
+    temperatureC: projects.temperatureC,
+    member: sql<boolean>`exists (select 1 from ${projectMembers} where ${projectMembers.projectId} = ${projects.id} and ${projectMembers.userId} = ${sql.placeholder("userId")})`,
+  })
+  .from(schemes)
+  .innerJoin(projects, eq(projects.id, schemes.projectId))
+  .leftJoin(users, eq(users.id, schemes.updatedById))
+  .where(eq(schemes.id, sql.placeholder("schemeId")))
+  .limit(1)
+  .prepare("scheme_head");
+
 export async function loadSchemeHeadFor({ user, schemeId }: { user: SessionUser; schemeId: string }): Promise<SchemeHead> {
   if (!isUuid(schemeId)) throw new AppError("not_found", "No such scheme.");
-  const [row] = await db
-    .select({
-      id: schemes.id,
-      projectId: schemes.projectId,
-      name: schemes.name,
-      description: schemes.description,
-      status: schemes.status,
-      sharedWithClient: schemes.sharedWithClient,
-      version: schemes.version,
-      copiedFromId: schemes.copiedFromId,
-      updatedAt: schemes.updatedAt,
-      updatedByName: users.name,
-      pitchHz: projects.pitchHz,
-      temperatureC: projects.temperatureC,
-      member:
-        user.role === "client"
-          ? sql<boolean>`exists (select 1 from ${projectMembers} where ${projectMembers.projectId} = ${projects.id} and ${projectMembers.userId} = ${user.id})`
-          : sql<boolean>`true`,
-    })
-    .from(schemes)
-    .innerJoin(projects, eq(projects.id, schemes.projectId))
-    .leftJoin(users, eq(users.id, schemes.updatedById))
-    .where(eq(schemes.id, schemeId))
-    .limit(1);
+  const [row] = await schemeHeadQuery.execute({ schemeId, userId: user.id });
   if (!row || (user.role === "client" && !(row.member && row.sharedWithClient))) throw new AppError("not_found", "No such scheme.");
   const { member: _member, ...head } = row;
   return head;

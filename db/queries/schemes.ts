@@ -8,7 +8,8 @@ import type { SessionUser } from "@/lib/server/guard";
 import { schemeDocumentSchema, type SchemeDocument, type SchemeRead, type SchemeStatus } from "@/lib/spec/document";
 import { checkDocument } from "@/lib/spec/validate";
 import { sendSchemeShared } from "@/lib/server/notify";
-import { assertOpen, loadProjectFor, loadSchemeFor } from "./access";
+import { readCache } from "@/lib/server/read-cache";
+import { assertOpen, loadProjectFor, loadSchemeFor, loadSchemeHeadFor } from "./access";
 
 async function toRead(tx: Store, scheme: Scheme, project: Project): Promise<SchemeRead> {
   const [document, author] = await Promise.all([
@@ -43,13 +44,46 @@ function validated(raw: unknown): SchemeDocument {
 // queries cannot give a half-old, half-new document.
 const snapshot = { isolationLevel: "repeatable read", accessMode: "read only" } as const;
 
-export async function getSchemeForUser({ user, schemeId }: { user: SessionUser; schemeId: string }): Promise<SchemeRead> {
-  const read = await db.transaction(async (tx) => {
-    const { scheme, project } = await loadSchemeFor({ user, schemeId, tx });
-    return toRead(tx, scheme, project);
-  }, snapshot);
-  // A committee member is not told which (perhaps unshared) scheme this one was copied from.
+/** A committee member is not told which (perhaps unshared) scheme this one was copied from. */
+function viewFor<T extends { copiedFromId: string | null }>(user: SessionUser, read: T): T {
   return user.role === "client" ? { ...read, copiedFromId: null } : read;
+}
+
+/**
+ * GET /api/schemes/:id as JSON text. One query checks access and reads the scheme's row and
+ * version; the document's JSON for that version comes from the read cache, or on a miss from one
+ * consistent snapshot of its rows, which then fills the cache.
+ */
+export async function getSchemeJsonForUser({ user, schemeId }: { user: SessionUser; schemeId: string }): Promise<string> {
+  const head = viewFor(user, await loadSchemeHeadFor({ user, schemeId }));
+  const documentJson = readCache.documents.get(`${head.id}:${head.version}`);
+  if (documentJson === undefined) {
+    const read = await db.transaction(async (tx) => {
+      const { scheme, project } = await loadSchemeFor({ user, schemeId, tx });
+      return toRead(tx, scheme, project);
+    }, snapshot);
+    readCache.documents.set(`${read.id}:${read.version}`, JSON.stringify(read.document));
+    return JSON.stringify({ scheme: viewFor(user, read) });
+  }
+  const { pitchHz, temperatureC, ...row } = head;
+  const meta: Omit<SchemeRead, "document"> = {
+    id: row.id,
+    projectId: row.projectId,
+    name: row.name,
+    description: row.description,
+    status: row.status,
+    sharedWithClient: row.sharedWithClient,
+    version: row.version,
+    copiedFromId: row.copiedFromId,
+    updatedAt: row.updatedAt.toISOString(),
+    updatedByName: row.updatedByName,
+    tuning: { pitchHz, temperatureC },
+  };
+  return `{"scheme":${JSON.stringify(meta).slice(0, -1)},"document":${documentJson}}}`;
+}
+
+export async function getSchemeForUser({ user, schemeId }: { user: SessionUser; schemeId: string }): Promise<SchemeRead> {
+  return (JSON.parse(await getSchemeJsonForUser({ user, schemeId })) as { scheme: SchemeRead }).scheme;
 }
 
 export async function createScheme({ user, projectId, name, description = "", document }: { user: SessionUser; projectId: string; name: string; description?: string; document?: unknown }): Promise<SchemeRead> {
@@ -101,6 +135,7 @@ export async function saveScheme({ user, schemeId, version, document, note = "" 
 
 export async function updateSchemeMeta({ user, schemeId, status, sharedWithClient }: { user: SessionUser; schemeId: string; status?: SchemeStatus; sharedWithClient?: boolean }): Promise<SchemeRead> {
   const { scheme, project } = await loadSchemeFor({ user, schemeId });
+  assertOpen(project, "share its schemes or change their status");
   const [updated] = await db
     .update(schemes)
     .set({ ...(status ? { status } : {}), ...(sharedWithClient !== undefined ? { sharedWithClient } : {}), updatedAt: new Date() })

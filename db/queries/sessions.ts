@@ -18,17 +18,21 @@ export async function createAuthSession({ userId }: { userId: string }): Promise
   return row!.id;
 }
 
+// Prepared once: this runs on every signed-in request, so neither Drizzle nor PostgreSQL plans it again.
+const liveSessionQuery = db
+  .select({ id: users.id, email: users.email, name: users.name, role: users.role, expiresAt: authSessions.expiresAt })
+  .from(authSessions)
+  .innerJoin(users, eq(users.id, authSessions.userId))
+  .where(and(eq(authSessions.id, sql.placeholder("sessionId")), isNull(authSessions.revokedAt), sql`${authSessions.expiresAt} > now()`, eq(users.disabled, false)))
+  .limit(1)
+  .prepare("live_session");
+
 /**
  * The session's user as the database knows them now, or null when the session was revoked, has
  * expired, or its account is disabled. One query, run on every request that needs a user.
  */
 export async function getLiveSession({ sessionId }: { sessionId: string }): Promise<LiveSession | null> {
-  const [row] = await db
-    .select({ id: users.id, email: users.email, name: users.name, role: users.role, expiresAt: authSessions.expiresAt })
-    .from(authSessions)
-    .innerJoin(users, eq(users.id, authSessions.userId))
-    .where(and(eq(authSessions.id, sessionId), isNull(authSessions.revokedAt), sql`${authSessions.expiresAt} > now()`, eq(users.disabled, false)))
-    .limit(1);
+  const [row] = await liveSessionQuery.execute({ sessionId });
   if (!row) return null;
   const { expiresAt, ...user } = row;
   return { user, expiresAt };

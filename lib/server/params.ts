@@ -30,3 +30,20 @@ export const schemeParams = z.object({ schemeId: idParam("scheme") });
 export const revisionParams = z.object({ schemeId: idParam("scheme"), version: versionParam });
 export const userParams = z.object({ userId: idParam("user") });
 export const memberParams = z.object({ projectId: idParam("project"), userId: idParam("member") });
+
+const LOCAL = "http://stopwright.invalid";
+
+/**
+ * Where to go after signing in: a path on this site, or "/". Resolved the way a browser would, so
+ * "//elsewhere", "/\elsewhere" (a browser reads the backslash as a slash) and "https://elsewhere"
+ * all come back as "/", and no crafted link can send someone to another site.
+ */
+export function safeReturnPath(raw: string | undefined): string {
+  if (!raw || raw.length > 2000 || !raw.startsWith("/")) return "/";
+  try {
+    const url = new URL(raw, LOCAL);
+    return url.origin === LOCAL ? `${url.pathname}${url.search}${url.hash}` : "/";
+  } catch {
+    return "/";
+  }
+}

@@ -1,5 +1,6 @@
 import "server-only";
 import { decode, type JWT } from "next-auth/jwt";
+import { LRUCache } from "lru-cache";
 import { cookies } from "next/headers";
 import { cache } from "react";
 import { getLiveSession, type LiveSession } from "@/db/queries/sessions";
@@ -11,6 +12,27 @@ export function sessionCookieName(): string {
 }
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * Tokens already decrypted by this process, by their exact text: a forged token cannot match one,
+ * and each use still checks the expiry and, in the database, that the session is live. Saves the
+ * key derivation and decryption (about a tenth of a scheme read's time) on every request.
+ */
+const decoded = new LRUCache<string, JWT>({ max: 10_000 });
+
+async function decodeToken(value: string): Promise<JWT | null> {
+  let token: JWT | null | undefined = decoded.get(value);
+  if (!token) {
+    try {
+      token = await decode({ token: value, secret: authSecret() });
+    } catch {
+      return null;
+    }
+    if (!token) return null;
+    decoded.set(value, token);
+  }
+  return typeof token.exp === "number" && token.exp * 1000 > Date.now() ? token : null;
+}
 
 /** The signed session token of this request, decoded, or null (absent, forged, expired). */
 async function readToken(): Promise<JWT | null> {
@@ -25,12 +47,7 @@ async function readToken(): Promise<JWT | null> {
       .sort((a, b) => Number(a.name.slice(name.length + 1)) - Number(b.name.slice(name.length + 1)))
       .map((c) => c.value)
       .join("");
-  if (!value) return null;
-  try {
-    return await decode({ token: value, secret: authSecret() });
-  } catch {
-    return null;
-  }
+  return value ? decodeToken(value) : null;
 }
 
 /**

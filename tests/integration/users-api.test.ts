@@ -75,13 +75,15 @@ describe("/api/users", () => {
     const admin = await makeUser("admin");
     const target = await makeUser("designer");
     const adminCookie = await signIn(admin);
-    const targetCookie = await signIn(target);
-    expect((await api("/api/users", { cookie: targetCookie })).status).toBe(403);
+    const designerCookie = await signIn(target);
+    expect((await api("/api/users", { cookie: designerCookie })).status).toBe(403);
 
     const promote = await api(`/api/users/${target.id}`, { method: "PATCH", cookie: adminCookie, body: { role: "admin" } });
     expect(promote.status).toBe(200);
     expect(promote.json.user.role).toBe("admin");
-    // The role is read from the database on each request, so the promotion applies at once.
+    // A change of role ends the sessions that carried the old one; the next sign-in has the new role.
+    expect((await api("/api/users", { cookie: designerCookie })).status).toBe(401);
+    const targetCookie = await signIn(target);
     expect((await api("/api/users", { cookie: targetCookie })).status).toBe(200);
 
     const disable = await api(`/api/users/${target.id}`, { method: "PATCH", cookie: adminCookie, body: { disabled: true } });

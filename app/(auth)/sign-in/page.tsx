@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { Wordmark } from "@/components/ui/logo";
 import { currentUser } from "@/lib/server/guard";
+import { safeReturnPath } from "@/lib/server/params";
 import { SignInForm } from "./sign-in-form";
 
 export const metadata: Metadata = { title: "Sign in" };
@@ -9,7 +10,7 @@ export const metadata: Metadata = { title: "Sign in" };
 export default async function SignInPage({ searchParams }: { searchParams: Promise<{ callbackUrl?: string }> }) {
   const { callbackUrl } = await searchParams;
   // Only same-site paths, so a crafted link cannot send someone elsewhere after sign-in.
-  const target = callbackUrl && callbackUrl.startsWith("/") && !callbackUrl.startsWith("//") ? callbackUrl : "/";
+  const target = safeReturnPath(typeof callbackUrl === "string" ? callbackUrl : undefined);
   if (await currentUser()) redirect(target);
   return (
     <main className="grid min-h-screen place-items-center px-4">

@@ -1,21 +1,21 @@
-import { getSchemeForUser, saveScheme, updateSchemeMeta } from "@/db/queries/schemes";
+import { getSchemeJsonForUser, saveScheme, updateSchemeMeta } from "@/db/queries/schemes";
 import { route } from "@/lib/server/guard";
-import { schemeMetaSchema } from "@/lib/spec/document";
+import { DOCUMENT_BODY_LIMIT } from "@/lib/server/input";
+import { schemeParams } from "@/lib/server/params";
+import { revisionNumber, schemeMetaSchema } from "@/lib/spec/document";
 import { z } from "zod";
 
-type Params = { schemeId: string };
-
-export const GET = route<undefined, Params>({ permission: "schemes:read" }, async ({ user, params }) => ({
-  scheme: await getSchemeForUser({ user, schemeId: params.schemeId }),
-}));
+export const GET = route({ permission: "schemes:read", params: schemeParams }, async ({ user, params }) =>
+  new Response(await getSchemeJsonForUser({ user, schemeId: params.schemeId }), { headers: { "content-type": "application/json" } }),
+);
 
 // The document is validated by saveScheme, which words each problem with its division and stop.
-const saveBody = z.object({ version: z.number().int().min(1), document: z.unknown(), note: z.string().max(200).optional() });
+const saveBody = z.object({ version: revisionNumber, document: z.unknown(), note: z.string().max(200).optional() });
 
-export const PUT = route<typeof saveBody, Params>({ permission: "schemes:edit", body: saveBody }, async ({ user, params, body }) => ({
+export const PUT = route({ permission: "schemes:edit", params: schemeParams, body: saveBody, bodyLimit: DOCUMENT_BODY_LIMIT }, async ({ user, params, body }) => ({
   scheme: await saveScheme({ user, schemeId: params.schemeId, version: body.version, document: body.document, note: body.note }),
 }));
 
-export const PATCH = route<typeof schemeMetaSchema, Params>({ permission: "schemes:edit", body: schemeMetaSchema }, async ({ user, params, body }) => ({
+export const PATCH = route({ permission: "schemes:edit", params: schemeParams, body: schemeMetaSchema }, async ({ user, params, body }) => ({
   scheme: await updateSchemeMeta({ user, schemeId: params.schemeId, ...body }),
 }));
