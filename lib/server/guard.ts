@@ -2,6 +2,7 @@ import "server-only";
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import type { z } from "zod";
+import "@/lib/validation/messages";
 import { can, roleLabels, type Permission, type Role } from "@/lib/roles";
 import { appOrigin } from "@/lib/env";
 import { AppError, errorResponse, invalid, toErrorBody, type FieldErrors } from "./errors";

@@ -4,6 +4,7 @@
  * Pure: shared by the browser (forms, live figures) and the server (validation before saving).
  */
 import { z } from "zod";
+import "@/lib/validation/messages";
 import { accessoriesSchema, divisionSchema, type SchemeInput } from "@/lib/estimate/scheme";
 
 export const schemeStatuses = ["draft", "proposed", "preferred", "accepted", "withdrawn"] as const;

@@ -35,7 +35,7 @@ export const projectInputSchema = z.object({
   /** ISO date (YYYY-MM-DD) or null. */
   targetDate: targetDateSchema.nullable().default(null),
   pitchHz: z.number({ error: "Pitch is a number in Hz." }).min(380, "Pitch below 380 Hz is not supported.").max(480, "Pitch above 480 Hz is not supported.").default(440),
-  temperatureC: z.number({ error: "Temperature is a number in °C." }).min(-10).max(40).default(18),
+  temperatureC: z.number({ error: "Temperature is a number in °C." }).min(-10, "Use a temperature from −10 to 40 °C.").max(40, "Use a temperature from −10 to 40 °C.").default(18),
   notes: z.string().max(4000, "Keep the notes under 4000 characters.").default(""),
 });
 export type ProjectInput = z.input<typeof projectInputSchema>;

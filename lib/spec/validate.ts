@@ -10,6 +10,22 @@ import { schemeDocumentSchema, toEstimatorScheme, type SchemeDocument } from "./
 export type DocumentIssues = Record<string, string[]>;
 export type DocumentCheck = { ok: true; document: SchemeDocument } | { ok: false; fields: DocumentIssues };
 
+/** Longest name quoted back in a message; a longer one (itself refused) is shortened with "…". */
+const QUOTED_NAME = 80;
+
+/** Only the names that messages quote, shortened: a 1 MB stop name is not echoed 1 MB at a time. */
+function namesOnly(raw: unknown): unknown {
+  const short = (v: unknown) => (typeof v === "string" && v.length > QUOTED_NAME ? `${v.slice(0, QUOTED_NAME)}…` : v);
+  const list = (v: unknown) => (Array.isArray(v) ? v : []);
+  const divisions = raw && typeof raw === "object" ? (raw as { divisions?: unknown }).divisions : undefined;
+  return {
+    divisions: list(divisions).map((d) => ({
+      name: short((d as { name?: unknown } | null)?.name),
+      stops: list((d as { stops?: unknown } | null)?.stops).map((s) => ({ name: short((s as { name?: unknown } | null)?.name) })),
+    })),
+  };
+}
+
 function add(out: DocumentIssues, key: string, message: string) {
   (out[key || "_"] ??= []).push(message);
 }
@@ -19,7 +35,8 @@ export function checkDocument(raw: unknown, prefix = ""): DocumentCheck {
   const out: DocumentIssues = {};
   const parsed = schemeDocumentSchema.safeParse(raw);
   if (!parsed.success) {
-    for (const issue of parsed.error.issues) add(out, prefix + issue.path.join("."), describeIssue(issue.path, issue.message, raw));
+    const names = namesOnly(raw);
+    for (const issue of parsed.error.issues) add(out, prefix + issue.path.join("."), describeIssue(issue.path, issue.message, names));
     return { ok: false, fields: out };
   }
   if (parsed.data.divisions.length) {

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import "./messages";
 
 /**
  * An e-mail address: at most 254 characters (RFC 5321's limit on a forward path, less its angle

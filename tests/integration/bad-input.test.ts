@@ -125,6 +125,13 @@ describe("dates, numbers and ids out of range", () => {
     const res = await api(`/api/schemes/${ctx.schemeId}`, { method: "PUT", cookie: ctx.designer, body: { version: ctx.version, document } });
     expectApiError(res, 422, "1 MiB stop id");
     expect(res.text.length).toBeLessThan(10_000);
+    // A name far too long is refused, and quoted back only in part.
+    const named = structuredClone(ctx.document);
+    named.divisions![0]!.stops![0]!.name = "N".repeat(100_000);
+    const long = await api(`/api/schemes/${ctx.schemeId}`, { method: "PUT", cookie: ctx.designer, body: { version: ctx.version, document: named } });
+    expectApiError(long, 422, "100,000-character stop name");
+    expect(long.json.error.fields["document.divisions.0.stops.0.name"].join(" ")).toMatch(/N…/);
+    expect(long.text.length).toBeLessThan(2_000);
   });
 
   it("refuses a body over the size limit with 413, and one nested past any document's depth with 400", async () => {
