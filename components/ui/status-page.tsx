@@ -24,18 +24,29 @@ export function StatusPicture({ kind }: { kind: "missing" | "fallen" }) {
   );
 }
 
-/** The frame of the not-found and error pages: wordmark, picture, heading, words, actions. */
-export function StatusPage({ picture, title, children, actions, testId }: { picture: ReactNode; title: string; children: ReactNode; actions: ReactNode; testId: string }) {
+type StatusPageProps = { picture: ReactNode; title: string; children: ReactNode; actions: ReactNode; testId: string; inApp?: boolean };
+
+/**
+ * The frame of the not-found and error pages: picture, heading, words, actions. On its own it fills
+ * the screen under the wordmark; `inApp`, it sits under the signed-in header, which already has one.
+ */
+export function StatusPage({ picture, title, children, actions, testId, inApp = false }: StatusPageProps) {
+  const panel = (
+    <div className="panel p-6 sm:p-8">
+      <div className="mb-4">{picture}</div>
+      <h1 className="mb-2 text-2xl font-semibold">{title}</h1>
+      <div className="space-y-2 text-sm text-ink-soft">{children}</div>
+      <div className="mt-5 flex flex-wrap gap-2">{actions}</div>
+    </div>
+  );
+  if (inApp) {
+    return <div className="mx-auto w-full max-w-lg py-6 sm:py-12" data-testid={testId}>{panel}</div>;
+  }
   return (
     <main className="grid min-h-screen place-items-center px-4 py-10" data-testid={testId}>
       <div className="w-full max-w-lg">
         <div className="mb-6 flex justify-center"><Wordmark /></div>
-        <div className="panel p-6 sm:p-8">
-          <div className="mb-4">{picture}</div>
-          <h1 className="mb-2 text-2xl font-semibold">{title}</h1>
-          <div className="space-y-2 text-sm text-ink-soft">{children}</div>
-          <div className="mt-5 flex flex-wrap gap-2">{actions}</div>
-        </div>
+        {panel}
       </div>
     </main>
   );

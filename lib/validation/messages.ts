@@ -60,4 +60,9 @@ export function stopwrightMessage(issue: Issue): string | undefined {
   }
 }
 
-z.config({ customError: stopwrightMessage });
+z.config({
+  customError: stopwrightMessage,
+  // In the browser, no compiled parsers: zod would probe `new Function`, which the
+  // Content-Security-Policy refuses (and reports, though zod catches it). The server keeps them.
+  ...(typeof window !== "undefined" ? { jitless: true } : {}),
+});

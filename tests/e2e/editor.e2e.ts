@@ -341,17 +341,17 @@ test.describe("read-only roles", () => {
     await expect(page.getByRole("button", { name: "Revisions" })).toHaveCount(0);
 
     await page.goto(schemePath(projectId, hiddenId));
-    await expect(page.getByRole("heading", { name: "This page could not be found." })).toBeVisible();
+    await expect(page.getByTestId("not-found")).toBeVisible();
     await expect(page.getByTestId("scheme-name")).toHaveCount(0);
     await page.goto(`${schemePath(projectId, hiddenId)}/stop-list`);
-    await expect(page.getByRole("heading", { name: "This page could not be found." })).toBeVisible();
+    await expect(page.getByTestId("not-found")).toBeVisible();
     await expect(page.getByTestId("stop-list")).toHaveCount(0);
   });
 
   test("a client who is not a member finds neither the project nor its shared scheme", async ({ page }) => {
     const { projectId, schemeId } = await sharedAndUnshared();
     await openAs(page, await makeUser("client"), schemePath(projectId, schemeId));
-    await expect(page.getByRole("heading", { name: "This page could not be found." })).toBeVisible();
+    await expect(page.getByTestId("not-found")).toBeVisible();
     await expect(page.getByTestId("board")).toHaveCount(0);
   });
 });
