@@ -6,7 +6,7 @@ import { can } from "@/lib/roles";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
 import { firmPricing } from "@/lib/server/rates";
-import { cachedText, readCache } from "@/lib/server/read-cache";
+import { cached, readCache } from "@/lib/server/read-cache";
 import { schemeDocumentSchema, type SchemeDocument } from "@/lib/spec/document";
 import { estimateDocument, withoutMoney } from "@/lib/spec/estimate";
 import { loadSchemeHeadFor, type SchemeHead } from "./access";
@@ -24,21 +24,22 @@ async function documentOf(head: SchemeHead): Promise<SchemeDocument> {
   return schemeDocumentSchema.parse(row.document);
 }
 
+const utf8 = new TextEncoder();
+
 /**
- * GET /api/schemes/:id/estimate as JSON text. An estimate depends only on the scheme version, the
- * project's tuning, the rate-set version (the firm's current set, or the one asked for) and whether the
- * role sees money, so it is computed once per such combination and kept in the read cache; a save, a
- * tuning change or a new rate version make a new key.
+ * GET /api/schemes/:id/estimate as JSON, encoded (UTF-8) once and kept so. An estimate depends only
+ * on the scheme version, the project's tuning, the rate-set version (the firm's current set, or the
+ * one asked for) and whether the role sees money, so it is computed once per such combination and
+ * kept in the read cache; a save, a tuning change or a new rate version make a new key.
  */
-export async function getEstimateJsonForUser({ user, schemeId, rateSetId }: { user: SessionUser; schemeId: string; rateSetId?: string | null }): Promise<string> {
+export async function getEstimateJsonForUser({ user, schemeId, rateSetId }: { user: SessionUser; schemeId: string; rateSetId?: string | null }): Promise<Uint8Array<ArrayBuffer>> {
   const head = await loadSchemeHeadFor({ user, schemeId });
   const money = can(user.role, "money:read");
   const { rates, key: ratesKey } = await firmPricing({ rateSetId });
   const key = [head.id, head.version, head.pitchHz, head.temperatureC, ratesKey, money ? "money" : "no-money"].join(":");
-  const text = await cachedText(readCache.estimates, key, async () => {
+  return cached(readCache.estimates, key, async () => {
     const result = estimateDocument(await documentOf(head), { pitchHz: head.pitchHz, temperatureC: head.temperatureC }, rates);
     if (!result.ok) throw new AppError("invalid", "This scheme cannot be estimated yet.", { document: [...result.messages] });
-    return JSON.stringify({ version: head.version, estimate: money ? result.estimate : withoutMoney(result.estimate) });
+    return utf8.encode(JSON.stringify({ version: head.version, estimate: money ? result.estimate : withoutMoney(result.estimate) }));
   });
-  return text!;
 }
