@@ -1,8 +1,8 @@
 import { getToken } from "next-auth/jwt";
 import { NextResponse, type NextRequest } from "next/server";
-import { appOrigin, authSecret, isDevelopment } from "@/lib/env";
+import { appOrigin, authSecret, env, isDevelopment } from "@/lib/env";
 import { changesState, foreignOriginProblem } from "@/lib/server/request-checks";
-import { newNonce, securityHeaders, staticSecurityHeaders } from "@/lib/server/security-headers";
+import { newNonce, securityHeaders, staticSecurityHeaders, storageOrigins } from "@/lib/server/security-headers";
 
 /** Framework files and fonts: fixed content, no scripts of ours to protect with a nonce. */
 function isStaticAsset(path: string): boolean {
@@ -37,7 +37,9 @@ export default async function proxy(req: NextRequest) {
   if (isStaticAsset(path)) return withHeaders(NextResponse.next(), staticSecurityHeaders({ https }));
 
   const nonce = newNonce();
-  const headers = securityHeaders({ nonce, https, dev: isDevelopment() });
+  const s = env();
+  const storage = storageOrigins({ endpoint: s.S3_ENDPOINT, bucket: s.S3_BUCKET, region: s.S3_REGION, forcePathStyle: s.S3_FORCE_PATH_STYLE });
+  const headers = securityHeaders({ nonce, https, dev: isDevelopment(), storage });
   try {
     decodeURIComponent(path);
   } catch {

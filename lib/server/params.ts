@@ -29,6 +29,7 @@ export const projectParams = z.object({ projectId: idParam("project") });
 export const schemeParams = z.object({ schemeId: idParam("scheme") });
 export const revisionParams = z.object({ schemeId: idParam("scheme"), version: versionParam });
 export const userParams = z.object({ userId: idParam("user") });
+export const fileParams = z.object({ fileId: idParam("file") });
 export const memberParams = z.object({ projectId: idParam("project"), userId: idParam("member") });
 
 const LOCAL = "http://stopwright.invalid";

@@ -12,16 +12,35 @@ export type HeaderOptions = {
   https: boolean;
   /** Development server: React's dev tools evaluate code, so 'unsafe-eval' is allowed there only. */
   dev: boolean;
+  /** Object storage the browser talks to directly (uploads PUT there, files and thumbnails load from there). */
+  storage?: readonly string[];
 };
 
-export function contentSecurityPolicy({ nonce, https, dev }: HeaderOptions): string {
+/**
+ * The origins of the object storage behind signed file links: the configured endpoint (the bucket
+ * as a sub-domain unless path-style), or AWS's regional S3 addresses when no endpoint is set.
+ */
+export function storageOrigins(s: { endpoint?: string; bucket?: string; region: string; forcePathStyle: boolean }): string[] {
+  if (s.endpoint) {
+    const url = new URL(s.endpoint);
+    const origins = [url.origin];
+    if (!s.forcePathStyle && s.bucket) origins.push(`${url.protocol}//${s.bucket}.${url.host}`);
+    return origins;
+  }
+  const host = `s3.${s.region}.amazonaws.com`;
+  return [`https://${host}`, ...(s.bucket ? [`https://${s.bucket}.${host}`] : [])];
+}
+
+export function contentSecurityPolicy({ nonce, https, dev, storage = [] }: HeaderOptions): string {
+  const files = storage.length ? ` ${storage.join(" ")}` : "";
   return [
     "default-src 'self'",
     `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${dev ? " 'unsafe-eval'" : ""}`,
     "style-src 'self' 'unsafe-inline'",
-    "img-src 'self' data: blob:",
+    `img-src 'self' data: blob:${files}`,
+    `media-src 'self'${files}`,
     "font-src 'self'",
-    "connect-src 'self'",
+    `connect-src 'self'${files}`,
     "object-src 'none'",
     "base-uri 'self'",
     "form-action 'self'",

@@ -1,7 +1,6 @@
 import { fileContentLink } from "@/db/queries/files";
 import { route } from "@/lib/server/guard";
-
-type Params = { fileId: string };
+import { fileParams } from "@/lib/server/params";
 
 /**
  * The file's bytes: after the access check, a redirect to a signed link that lives a minute or so
@@ -9,7 +8,7 @@ type Params = { fileId: string };
  * member removed from the project, or a committee member after the file is unshared, gets nothing.
  * `?variant=thumbnail` for an image's thumbnail, `?download=1` to save rather than open.
  */
-export const GET = route<undefined, Params>({ permission: "files:read" }, async ({ user, params, url }) => {
+export const GET = route({ permission: "files:read", params: fileParams }, async ({ user, params, url }) => {
   const link = await fileContentLink({
     user,
     fileId: params.fileId,

@@ -1,11 +1,10 @@
 import { listFilesForUser, startUpload } from "@/db/queries/files";
 import { startUploadSchema } from "@/lib/files/kinds";
 import { route } from "@/lib/server/guard";
-
-type Params = { projectId: string };
+import { projectParams } from "@/lib/server/params";
 
 /** The project's survey files; `?schemeId=&stopId=` (or `&divisionId=`) narrows to one stop's or division's. */
-export const GET = route<undefined, Params>({ permission: "files:read" }, async ({ user, params, url }) => ({
+export const GET = route({ permission: "files:read", params: projectParams }, async ({ user, params, url }) => ({
   files: await listFilesForUser({
     user,
     projectId: params.projectId,
@@ -19,6 +18,6 @@ export const GET = route<undefined, Params>({ permission: "files:read" }, async 
  * Starts an upload: the answer holds a link the browser PUTs the bytes to, straight to object
  * storage; then POST /api/files/:id/complete has the server check them and record the file.
  */
-export const POST = route<typeof startUploadSchema, Params>({ permission: "files:write", body: startUploadSchema }, async ({ user, params, body }) =>
+export const POST = route({ permission: "files:write", params: projectParams, body: startUploadSchema }, async ({ user, params, body }) =>
   Response.json({ upload: await startUpload({ user, projectId: params.projectId, input: body }) }, { status: 201 }),
 );
