@@ -88,7 +88,7 @@ export function publicRoute<S extends z.ZodType>(opts: { body: S }, fn: (args: {
     try {
       assertSameOrigin(req, appOrigin());
       assertJsonBody(req);
-      const parsed = opts.body.safeParse(await readJson(req));
+      const parsed = opts.body.safeParse(await readJsonBody(req));
       if (!parsed.success) throw invalid(parsed.error);
       const result = await fn({ body: parsed.data, req });
       return result instanceof Response ? result : Response.json(result ?? { ok: true });

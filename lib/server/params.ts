@@ -25,6 +25,16 @@ export const versionParam = z
   })
   .transform(Number);
 
+const WHAT: Record<string, string> = {
+  projectId: "project", schemeId: "scheme", userId: "user", fileId: "file", mailId: "message", attachmentId: "attachment",
+  commentId: "comment", noteId: "note", invitationId: "invitation",
+};
+
+/** Path parameters that are all ids: `uuidParams("projectId", "userId")`. */
+export function uuidParams<K extends string>(...names: K[]) {
+  return z.object(Object.fromEntries(names.map((n) => [n, idParam(WHAT[n] ?? "record")])) as Record<K, ReturnType<typeof idParam>>);
+}
+
 export const projectParams = z.object({ projectId: idParam("project") });
 export const schemeParams = z.object({ schemeId: idParam("scheme") });
 export const revisionParams = z.object({ schemeId: idParam("scheme"), version: versionParam });

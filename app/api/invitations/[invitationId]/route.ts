@@ -1,6 +1,7 @@
 import { withdrawInvitation } from "@/db/queries/committee";
 import { route } from "@/lib/server/guard";
+import { uuidParams } from "@/lib/server/params";
 
-export const DELETE = route<undefined, { invitationId: string }>({ permission: "committee:manage" }, async ({ user, params }) => ({
+export const DELETE = route({ permission: "committee:manage", params: uuidParams("invitationId") }, async ({ user, params }) => ({
   invitation: await withdrawInvitation({ user, invitationId: params.invitationId }),
 }));

@@ -1,6 +1,7 @@
 import { deleteEntry } from "@/db/queries/comments";
 import { route } from "@/lib/server/guard";
+import { uuidParams } from "@/lib/server/params";
 
-export const DELETE = route<undefined, { noteId: string }>({ permission: "notes:write" }, async ({ user, params }) =>
+export const DELETE = route({ permission: "notes:write", params: uuidParams("noteId") }, async ({ user, params }) =>
   deleteEntry({ user, thread: "notes", id: params.noteId }),
 );

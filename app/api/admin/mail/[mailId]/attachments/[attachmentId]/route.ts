@@ -1,8 +1,9 @@
 import { getMailAttachment } from "@/lib/mail/outbox";
 import { route } from "@/lib/server/guard";
+import { uuidParams } from "@/lib/server/params";
 
 /** An attachment as it was sent, for the administrator to download. */
-export const GET = route<undefined, { mailId: string; attachmentId: string }>({ permission: "mail:read" }, async ({ params }) => {
+export const GET = route({ permission: "mail:read", params: uuidParams("mailId", "attachmentId") }, async ({ params }) => {
   const file = await getMailAttachment(params);
   return new Response(new Uint8Array(file.content), {
     headers: {
