@@ -1,6 +1,7 @@
 /** How the trade writes pitches, compasses and treatments: shared by the editor, the stop list and the drawings. */
 import { actions, chestTypes, families, constructions, materials, treatments, type Treatment } from "@/lib/estimate/scheme";
 import { formatFootage, parseFootage } from "@/lib/estimate";
+import { groupThousands } from "@/lib/spec/digits";
 
 type StopLike = { footage: string | number; ranks?: number; family: string };
 
@@ -166,8 +167,9 @@ export function couplerName(c: { from: string; to: string; octave: -1 | 0 | 1 },
 export function formatMoney(amount: string, currency: string, { signed = false }: { signed?: boolean } = {}): string {
   const negative = amount.startsWith("-");
   const [whole, cents = "00"] = amount.replace(/^[-+]/, "").split(".");
-  const grouped = whole!.replace(/\B(?=(\d{3})+(?!\d))/g, "\u202f");
-  const zero = /^0*\.?0*$/.test(amount.replace(/^[-+]/, ""));
+  const grouped = groupThousands(whole!, "\u202f");
+  // A decimal amount is zero when no digit but 0 appears in it.
+  const zero = !/[1-9]/.test(amount);
   const sign = negative && !zero ? "−" : signed && !zero ? "+" : "";
   return `${sign}${currency === "EUR" ? "€" : currency === "GBP" ? "£" : `${currency} `}${grouped}.${cents.padEnd(2, "0")}`;
 }
