@@ -11,6 +11,7 @@ import {
 import { currencySign } from "@/lib/quote/currency";
 import { formatAmount } from "@/lib/quote/totals";
 import type { DocumentFonts } from "./assets";
+import { groupThousands } from "@/lib/spec/digits";
 
 export const SERIF = "Source Serif 4";
 export const SANS = "Inter";
@@ -137,7 +138,7 @@ export const formatMoney = formatAmount;
 export function formatCount(n: number, digits = 0): string {
   const fixed = Math.abs(n).toFixed(digits);
   const [whole, fraction] = fixed.split(".");
-  return `${n < 0 && Number(fixed) !== 0 ? "−" : ""}${whole!.replace(/\B(?=(\d{3})+(?!\d))/g, NNBSP)}${fraction ? `.${fraction}` : ""}`;
+  return `${n < 0 && Number(fixed) !== 0 ? "−" : ""}${groupThousands(whole!, NNBSP)}${fraction ? `.${fraction}` : ""}`;
 }
 
 export function spacer(after = 120): Paragraph {

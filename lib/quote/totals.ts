@@ -8,6 +8,7 @@
 import DecimalJs from "decimal.js";
 import type { Estimate } from "@/lib/estimate";
 import { hundredths, lumpSumCategoryLabels, taxCharged, type Commercial, type LumpSumCategory } from "./commercial";
+import { groupThousands } from "@/lib/spec/digits";
 
 /** A private Decimal: 40 significant digits, half-up rounding as on an invoice; no global configuration touched. */
 const Dec = DecimalJs.clone({ precision: 40, rounding: DecimalJs.ROUND_HALF_UP });
@@ -163,7 +164,7 @@ export function sumMoney(amounts: readonly string[]): string {
 export function formatAmount(amount: string): string {
   const negative = amount.startsWith("-");
   const [whole, fraction = "00"] = amount.replace(/^-/, "").split(".");
-  return `${negative ? "−" : ""}${whole!.replace(/\B(?=(\d{3})+(?!\d))/g, "\u202f")}.${fraction.padEnd(2, "0")}`;
+  return `${negative ? "−" : ""}${groupThousands(whole!, "\u202f")}.${fraction.padEnd(2, "0")}`;
 }
 
 /** Exact difference b − a of two amounts. */

@@ -5,6 +5,7 @@
  * zeros, within PostgreSQL's integer (2^31 − 1). Anything else names nothing: 404.
  */
 import { z } from "zod";
+import { AppError } from "./errors";
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 export const MAX_INT4 = 2_147_483_647;
@@ -27,7 +28,7 @@ export const versionParam = z
 
 const WHAT: Record<string, string> = {
   projectId: "project", schemeId: "scheme", userId: "user", fileId: "file", mailId: "message", attachmentId: "attachment",
-  commentId: "comment", noteId: "note", invitationId: "invitation",
+  commentId: "comment", noteId: "note", invitationId: "invitation", quotationId: "quotation", rateSetId: "rate set",
 };
 
 /** Path parameters that are all ids: `uuidParams("projectId", "userId")`. */
@@ -41,6 +42,17 @@ export const revisionParams = z.object({ schemeId: idParam("scheme"), version: v
 export const userParams = z.object({ userId: idParam("user") });
 export const fileParams = z.object({ fileId: idParam("file") });
 export const memberParams = z.object({ projectId: idParam("project"), userId: idParam("member") });
+export const quotationParams = z.object({ quotationId: idParam("quotation") });
+export const quotationDocumentParams = z.object({ quotationId: idParam("quotation"), kind: z.string().max(40) });
+export const rateSetParams = z.object({ rateSetId: idParam("rate set") });
+export const rateSetVersionParams = z.object({ rateSetId: idParam("rate set"), version: versionParam });
+
+/** A version number from the query string (?from=, ?version=): the same rule as in a path, else 404. */
+export function parseVersion(raw: string): number {
+  const parsed = versionParam.safeParse(raw);
+  if (!parsed.success) throw new AppError("not_found", parsed.error.issues[0]?.message ?? "No such version.");
+  return parsed.data;
+}
 
 const LOCAL = "http://stopwright.invalid";
 

@@ -4,6 +4,7 @@ import mammoth from "mammoth";
 import { afterAll, describe, expect, it } from "vitest";
 import { smallDocument } from "../support/fixtures";
 import { api, baseUrl, closeTestDb, makeUser, signIn, testDb, type TestUser } from "../support/server";
+import { groupThousands } from "@/lib/spec/digits";
 
 afterAll(closeTestDb);
 
@@ -137,7 +138,7 @@ describe("quotations", () => {
     expect(text).toContain(issued.number);
     for (const s of smallDocument().divisions!.flatMap((d) => d.stops!)) expect(text).toContain(s.name);
     const [w, c] = issued.quotation.totals.totalAmount.split(".");
-    expect(text).toContain(`${w.replace(/\B(?=(\d{3})+(?!\d))/g, " ")}.${c}`);
+    expect(text).toContain(`${groupThousands(w, " ")}.${c}`);
   }, 60_000);
 
   it("lets only estimators and administrators make, change and issue quotations", async () => {

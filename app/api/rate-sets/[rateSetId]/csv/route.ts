@@ -1,10 +1,10 @@
 import { getRateSet, getRateSetVersion } from "@/db/queries/rate-sets";
 import { rateBookFields, ratesToCsv } from "@/lib/rates-book";
 import { route } from "@/lib/server/guard";
-import { parseVersion } from "@/lib/server/params";
+import { parseVersion, rateSetParams } from "@/lib/server/params";
 
 /** The set (its latest version, or ?version=) as a CSV file a spreadsheet opens. */
-export const GET = route<undefined, { rateSetId: string }>({ permission: "rates:manage" }, async ({ params, url }) => {
+export const GET = route({ permission: "rates:manage", params: rateSetParams }, async ({ params, url }) => {
   const { set } = await getRateSet({ rateSetId: params.rateSetId });
   const v = await getRateSetVersion({ rateSetId: set.id, version: url.searchParams.get("version") ? parseVersion(url.searchParams.get("version")!) : set.version });
   const name = `${set.name.replace(/[^A-Za-z0-9]+/g, "-").replace(/^-|-$/g, "").toLowerCase() || "rates"}-v${v.version}.csv`;

@@ -3,6 +3,7 @@ import { ratesSchema } from "@/lib/estimate";
 import { rateBookFields, ratesFromCsv } from "@/lib/rates-book";
 import { AppError } from "@/lib/server/errors";
 import { route } from "@/lib/server/guard";
+import { rateSetParams } from "@/lib/server/params";
 import { importRatesSchema } from "@/lib/validation/rate-sets";
 
 /**
@@ -11,7 +12,7 @@ import { importRatesSchema } from "@/lib/validation/rate-sets";
  * and new value and its problems. With `commit` it saves a new version only when every row is good;
  * a bad file answers 422 with the same preview and saves nothing.
  */
-export const POST = route<typeof importRatesSchema, { rateSetId: string }>({ permission: "rates:manage", body: importRatesSchema }, async ({ user, params, body }) => {
+export const POST = route({ permission: "rates:manage", body: importRatesSchema, params: rateSetParams }, async ({ user, params, body }) => {
   const { set } = await getRateSet({ rateSetId: params.rateSetId });
   const base = await getRateSetVersion({ rateSetId: set.id, version: set.version });
   const result = ratesFromCsv(ratesSchema, rateBookFields, body.csv, base.rates);
