@@ -2,10 +2,13 @@ import Link from "next/link";
 import { formatDate, formatNumber } from "@/components/spec/format";
 import { StopList } from "@/components/spec/stop-list";
 import { StateMark } from "@/components/ui/state-mark";
+import { currencySymbol } from "@/lib/quote/currency";
+import { formatAmount } from "@/lib/quote/totals";
 import type { SchemeRead } from "@/lib/spec/document";
 
-/** The figures the firm shares with its client's committee: counts and weeks, never hours, rates or money. */
+/** The figures the firm shares with its client's committee: counts and weeks, and the price of a tender sent to them; never hours, rates or costs. */
 export type HeadlineFigures = {
+  tender: { number: string; totalAmount: string; currency: string; validUntil: string | null; status: string } | null;
   stops: number;
   ranks: number;
   pipes: { total: number; new: number; reused: number; restored: number };
@@ -42,6 +45,17 @@ export function CommitteeScheme({ scheme, projectName, clientName, figures }: { 
             </div>
             <div><dt className="text-xs text-tin">Programme</dt><dd className="num text-xl font-semibold">{formatNumber(figures.weeks, 1)} weeks</dd></div>
           </dl>
+          {figures.tender && (
+            <p className="mt-3 border-t border-tin-rule pt-2 text-sm" data-testid="tender-price">
+              Tender <span className="num">{figures.tender.number}</span>:{" "}
+              <span className="num text-lg font-semibold">{currencySymbol(figures.tender.currency)}{formatAmount(figures.tender.totalAmount)}</span>
+              {figures.tender.status === "lapsed" ? (
+                <span className="text-caution"> — lapsed on {formatDate(figures.tender.validUntil)}; ask the firm for a new one.</span>
+              ) : figures.tender.validUntil ? (
+                <span className="text-ink-soft"> — valid until {formatDate(figures.tender.validUntil)}. Options are priced apart; see the tender on the project page.</span>
+              ) : null}
+            </p>
+          )}
           <ul className="mt-3 flex flex-wrap gap-x-4 gap-y-1 text-xs" aria-label="Chest space">
             {figures.chests.map((c) => (
               <li key={c.name} className={`flex items-center gap-1 ${c.fits === false ? "font-semibold text-clash" : c.fits ? "text-fit" : "text-tin"}`}>

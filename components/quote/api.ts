@@ -29,6 +29,7 @@ export const quoteApi = {
   getQuotation: (id: string) => call<{ quotation: QuotationRead }>("GET", `/api/quotations/${id}`),
   saveQuotation: (id: string, body: { version: number; commercial: Commercial }) => call<{ quotation: QuotationRead }>("PUT", `/api/quotations/${id}`, body),
   issueQuotation: (id: string, version: number) => call<{ quotation: QuotationRead }>("POST", `/api/quotations/${id}/issue`, { version }),
+  sendTender: (id: string) => call<{ quotation: QuotationRead; sentTo: number }>("POST", `/api/quotations/${id}/send`, {}),
   decide: (id: string, outcome: "accepted" | "declined") => call<{ quotation: QuotationRead }>("POST", `/api/quotations/${id}/decision`, { outcome }),
 };
 

@@ -3,7 +3,7 @@ import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
 import { quotations, quoteCounters, schemeRevisions, schemes, users, type Project, type Quotation as QuotationRow } from "@/db/schema";
 import { commercialSchema, defaultCommercial, type Commercial } from "@/lib/quote/commercial";
-import { listsQuotation, mayReadQuotation } from "@/lib/quote/access";
+import { listsQuotation, maySeeTotal } from "@/lib/quote/access";
 import {
   addDays, buildQuotation, effectiveStatus, formatQuoteNumber, QuotationError, type Quotation, type QuoteStatus,
 } from "@/lib/quote/quotation";
@@ -28,7 +28,7 @@ export type QuotationSummary = {
   validUntil: string | null;
   issuedAt: string | null;
   sentAt: string | null;
-  /** Null for roles that may not see money. */
+  /** Null for roles that may not see money, and for a committee member until the tender was sent. */
   totalAmount: string | null;
   currency: string;
   updatedAt: string;
@@ -105,7 +105,7 @@ function summaryOf(row: QuotationRow, q: Quotation | null, schemeName: string, u
     validUntil: row.validUntil,
     issuedAt: toIso(row.issuedAt),
     sentAt: toIso(row.sentAt),
-    totalAmount: q && mayReadQuotation(user.role) ? q.totals.totalAmount : null,
+    totalAmount: q && maySeeTotal(user.role, row.sentAt !== null) ? q.totals.totalAmount : null,
     currency: (row.commercial as Commercial).currency,
     updatedAt: row.updatedAt.toISOString(),
   };
@@ -236,4 +236,39 @@ export async function decideQuotation({ user, quotationId, outcome }: { user: Se
     .returning();
   if (!updated) throw new AppError("conflict", `Quotation ${row.number} changed meanwhile; reload it.`);
   return toRead(updated, project, user);
+}
+
+/**
+ * Marks an issued quotation as sent to the committee, once: from then on its members find the tender
+ * and its price. Returns the row as it now stands; the caller mails the tender after this has stood.
+ */
+export async function markQuotationSent({ user, quotationId, check }: { user: SessionUser; quotationId: string; check: (projectId: string) => Promise<void> }): Promise<{ read: QuotationRead; project: Project; firstTime: boolean }> {
+  const { row, project } = await loadQuotationRow({ user, quotationId });
+  assertOpen(project);
+  await check(project.id);
+  const status = effectiveStatus(row.status, row.validUntil, todayIso());
+  if (status === "draft") throw new AppError("conflict", `Quotation ${row.number} is a draft; issue it before sending the tender.`);
+  if (status === "lapsed") throw new AppError("conflict", `Quotation ${row.number} lapsed on ${row.validUntil}; make a new quotation before sending a tender.`);
+  if (status !== "issued") throw new AppError("conflict", `Quotation ${row.number} was ${status}; the committee has already answered it.`);
+  const [updated] = await db
+    .update(quotations)
+    .set({ sentAt: row.sentAt ?? new Date(), updatedAt: new Date() })
+    .where(and(eq(quotations.id, quotationId), eq(quotations.status, "issued")))
+    .returning();
+  if (!updated) throw new AppError("conflict", `Quotation ${row.number} changed meanwhile; reload it.`);
+  return { read: await toRead(updated, project, user), project, firstTime: row.sentAt === null };
+}
+
+/** The latest tender sent to the committee for a scheme (its number, price and validity), or null. */
+export async function sentTenderOfScheme({ schemeId }: { schemeId: string }): Promise<{ number: string; totalAmount: string; currency: string; validUntil: string | null; status: QuoteStatus } | null> {
+  const rows = await db
+    .select()
+    .from(quotations)
+    .where(and(eq(quotations.schemeId, schemeId), sql`${quotations.sentAt} is not null`))
+    .orderBy(sql`${quotations.sentAt} desc`)
+    .limit(1);
+  const row = rows[0];
+  const snap = row?.snapshot as Quotation | null | undefined;
+  if (!row || !snap) return null;
+  return { number: row.number, totalAmount: snap.totals.totalAmount, currency: snap.commercial.currency, validUntil: row.validUntil, status: effectiveStatus(row.status, row.validUntil, todayIso()) };
 }

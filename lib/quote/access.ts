@@ -15,6 +15,11 @@ export function mayReadQuotation(role: Role): boolean {
   return can(role, "money:read");
 }
 
+/** The quotation's total: the money roles always; a committee member once the tender was sent to them. */
+export function maySeeTotal(role: Role, sentToClient: boolean): boolean {
+  return can(role, "money:read") || (role === "client" && sentToClient);
+}
+
 /**
  * The tender goes to the firm's money roles, and to a committee member once it was sent to them;
  * the internal cost sheet never leaves the money roles; the work list (no prices) is for the workshop

@@ -3,7 +3,11 @@ import { and, eq, ne } from "drizzle-orm";
 import { db } from "@/db/client";
 import { firms, projectMembers, users, type Project } from "@/db/schema";
 import { appOrigin } from "@/lib/env";
-import { composeMail, queueMail } from "@/lib/mail";
+import { composeMail, queueMail, type MailAttachment } from "@/lib/mail";
+import { currencySymbol } from "@/lib/quote/currency";
+import { formatLongDate } from "@/lib/quote/programme-chart";
+import type { Quotation } from "@/lib/quote/quotation";
+import { formatAmount } from "@/lib/quote/totals";
 import { INVITATION_DAYS } from "@/lib/spec/committee";
 
 /**
@@ -94,4 +98,28 @@ export async function sendCommentNotice({ project, schemeId, schemeName, author,
     footer: `You receive this as a member of the project ${project.name} at the firm.`,
   });
   return queueMail({ kind: "comment", to: recipients.map((r) => r.email), subject: `${project.name}: comment by ${author.name}`, ...body });
+}
+
+/**
+ * The tender of an issued quotation, as a Word document, to each committee member: one message each,
+ * so no one learns the others' addresses. Returns how many messages were queued.
+ */
+export async function sendTender({ project, quotation, document, sentBy }: { project: Project; quotation: Quotation; document: MailAttachment; sentBy: string }): Promise<number> {
+  const recipients = await projectRecipients({ projectId: project.id, side: "committee" });
+  const firm = quotation.firm.name || (await firmName());
+  const total = `${currencySymbol(quotation.commercial.currency)}${formatAmount(quotation.totals.totalAmount)}`;
+  const body = composeMail({
+    paragraphs: [
+      `${sentBy} of ${firm} sends the organ committee of ${project.name} the tender ${quotation.number} for the scheme "${quotation.scheme.name}".`,
+      `The tendered price is ${total}${quotation.validUntil ? `, valid until ${formatLongDate(quotation.validUntil)}` : ""}. The tender is attached as a Word document; its options are priced apart from the total.`,
+      `You can also download it from the project's page, where the committee's schemes, comparison and comments are.`,
+    ],
+    links: [{ label: "Open the project", url: url(`/projects/${project.id}`) }],
+    signature: firm,
+    footer: `You receive this as a member of the organ committee of ${project.name}.`,
+  });
+  const queued = await Promise.all(
+    recipients.map((r) => queueMail({ kind: "tender", to: r.email, subject: `${project.name}: tender ${quotation.number}`, ...body, attachments: [document] })),
+  );
+  return queued.filter(Boolean).length;
 }

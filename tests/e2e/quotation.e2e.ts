@@ -2,7 +2,8 @@ import { readFileSync } from "node:fs";
 import { expect, test } from "@playwright/test";
 import mammoth from "mammoth";
 import { smallDocument } from "../support/fixtures";
-import { closeTestDb, makeUser, testDb } from "../support/server";
+import { waitForMail } from "../support/mail";
+import { api, closeTestDb, makeUser, signIn, testDb } from "../support/server";
 import { openAs, projectWithScheme, uid } from "./editor-helpers";
 
 test.describe.configure({ timeout: 120_000 });
@@ -11,7 +12,7 @@ test.afterAll(closeTestDb);
 test("an estimator edits a rate, prices a scheme, adds a lump sum and an option, issues the quotation and downloads the tender", async ({ page }) => {
   const designer = await makeUser("designer");
   const estimator = await makeUser("estimator");
-  const { projectId } = await projectWithScheme(designer, smallDocument("Scheme A"), `Quotation test ${uid()}`);
+  const { projectId, schemeId } = await projectWithScheme(designer, smallDocument("Scheme A"), `Quotation test ${uid()}`);
 
   // A rate set of the test's own, with one rate changed in the editor.
   await openAs(page, estimator, "/rates");
@@ -79,6 +80,28 @@ test("an estimator edits a rate, prices a scheme, adds a lump sum and an option,
   expect(text).toContain("Scaffold tower to the gallery");
   expect(text).toContain("Cymbelstern");
   expect(readFileSync((await download.path())!).subarray(0, 2).toString()).toBe("PK");
+
+  // Send it to the committee: each member gets the tender by e-mail, and finds it and its price in the project.
+  const member = await makeUser("client");
+  const dc = await signIn(designer);
+  await api(`/api/projects/${projectId}/members`, { method: "POST", cookie: dc, body: { email: member.email } });
+  await api(`/api/schemes/${schemeId}`, { method: "PATCH", cookie: dc, body: { sharedWithClient: true } });
+  page.once("dialog", (d) => void d.accept());
+  await page.getByRole("button", { name: "Send the tender to the committee" }).click();
+  await expect(page.getByTestId("quote-notice")).toContainText("went to 1 committee member");
+  await expect(page.getByTestId("tender-sent")).toBeVisible();
+  const total = (await page.getByTestId("quote-total").textContent())!.trim();
+  const mail = await waitForMail((m) => m.envelopeTo.includes(member.email) && m.subject.includes(number));
+  expect(mail.attachments.map((a) => a.filename)).toEqual([`tender-${number}.docx`]);
+  expect((await mammoth.extractRawText({ buffer: mail.attachments[0]!.content })).value).toContain("Cymbelstern");
+
+  await page.context().clearCookies();
+  await openAs(page, member, `/projects/${projectId}`);
+  const row = page.getByTestId(`quotation-${number}`);
+  await expect(row.getByTestId("quotation-total")).toHaveText(total);
+  await expect(row.getByRole("link", { name: "Tender (.docx)" })).toBeVisible();
+  await page.getByRole("link", { name: "Scheme A" }).first().click();
+  await expect(page.getByTestId("tender-price")).toContainText(number);
 });
 
 test("the workshop finds the work list of an issued quotation, without prices", async ({ page }) => {

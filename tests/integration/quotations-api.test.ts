@@ -5,6 +5,7 @@ import { afterAll, describe, expect, it } from "vitest";
 import { smallDocument } from "../support/fixtures";
 import { api, baseUrl, closeTestDb, makeUser, signIn, testDb, type TestUser } from "../support/server";
 import { groupThousands } from "@/lib/spec/digits";
+import { waitForMail } from "../support/mail";
 
 afterAll(closeTestDb);
 
@@ -177,10 +178,11 @@ describe("quotations", () => {
     // Not sent yet: the committee member does not learn it exists.
     expect((await download(q.id, "tender", cc)).status).toBe(404);
     expect((await api(`/api/projects/${ctx.project.id}/quotations`, { cookie: cc })).json.quotations).toEqual([]);
-    // Once it was sent to the committee (as the sending step records it): the tender, and nothing else.
-    await testDb().query("update quotations set sent_at = now() where id = $1", [q.id]);
+    // Once it was sent to the committee: the tender and its price, and nothing else.
+    const sent = await api(`/api/quotations/${q.id}/send`, { method: "POST", cookie: ctx.ec, body: {} });
+    expect(sent.status).toBe(200);
     const seen = (await api(`/api/projects/${ctx.project.id}/quotations`, { cookie: cc })).json.quotations;
-    expect(seen.map((x: { id: string; totalAmount: string | null }) => [x.id, x.totalAmount])).toEqual([[q.id, null]]);
+    expect(seen.map((x: { id: string; totalAmount: string | null }) => [x.id, x.totalAmount])).toEqual([[q.id, sent.json.quotation.quotation.totals.totalAmount]]);
     expect((await download(q.id, "tender", cc)).status).toBe(200);
     expect((await download(q.id, "cost-sheet", cc)).status).toBe(403);
     expect((await download(q.id, "work-list", cc)).status).toBe(403);
@@ -189,6 +191,54 @@ describe("quotations", () => {
     const stranger = await signIn(await makeUser("client"));
     expect((await download(q.id, "tender", stranger)).status).toBe(404);
   }, 60_000);
+
+  it("sends the issued tender to each committee member by e-mail, with the Word document attached", async () => {
+    const ctx = await setUp();
+    const q = await create(ctx);
+    // A draft is not sent, and a project without a committee has no one to send to; nothing is recorded.
+    const draft = await api(`/api/quotations/${q.id}/send`, { method: "POST", cookie: ctx.ec, body: {} });
+    expect(draft.status).toBe(409);
+    expect(draft.json.error.message).toMatch(/draft; issue it/);
+    const issued = (await api(`/api/quotations/${q.id}/issue`, { method: "POST", cookie: ctx.ec, body: { version: q.version } })).json.quotation;
+    const nobody = await api(`/api/quotations/${q.id}/send`, { method: "POST", cookie: ctx.ec, body: {} });
+    expect(nobody.status).toBe(409);
+    expect(nobody.json.error.message).toMatch(/no committee member/);
+    expect((await testDb().query("select sent_at from quotations where id = $1", [q.id])).rows[0].sent_at).toBeNull();
+
+    const members = [await makeUser("client"), await makeUser("client")];
+    for (const m of members) await api(`/api/projects/${ctx.project.id}/members`, { method: "POST", cookie: ctx.dc, body: { email: m.email } });
+    // Only the money roles that issue quotations send them.
+    for (const role of ["designer", "workshop", "client"] as const) {
+      expect((await api(`/api/quotations/${q.id}/send`, { method: "POST", cookie: await signIn(await makeUser(role)), body: {} })).status, role).toBe(403);
+    }
+    const res = await api(`/api/quotations/${q.id}/send`, { method: "POST", cookie: ctx.ec, body: {} });
+    expect(res.status).toBe(200);
+    expect(res.json.sentTo).toBe(2);
+    expect(res.json.quotation.sentAt).toEqual(expect.any(String));
+
+    const [w, c] = issued.quotation.totals.totalAmount.split(".");
+    for (const m of members) {
+      // One message each: no member learns the others' addresses.
+      const mail = await waitForMail((x) => x.envelopeTo.includes(m.email) && x.subject.includes(issued.number));
+      expect(mail.envelopeTo).toEqual([m.email]);
+      expect(mail.text.replace(/[\s\u202f]+/g, " ")).toContain(`${groupThousands(w!, " ")}.${c}`);
+      const [doc] = mail.attachments;
+      expect(doc!.filename).toBe(`tender-${issued.number}.docx`);
+      expect(doc!.contentType).toBe("application/vnd.openxmlformats-officedocument.wordprocessingml.document");
+      const text = (await mammoth.extractRawText({ buffer: doc!.content })).value;
+      expect(text).toContain(issued.number);
+      for (const s of smallDocument().divisions!.flatMap((d) => d.stops!)) expect(text).toContain(s.name);
+    }
+    // The committee member downloads the same tender from the project.
+    const cc = await signIn(members[0]!);
+    expect((await download(q.id, "tender", cc)).status).toBe(200);
+
+    // Once answered, it is not sent again.
+    await api(`/api/quotations/${q.id}/decision`, { method: "POST", cookie: ctx.ec, body: { outcome: "accepted" } });
+    const late = await api(`/api/quotations/${q.id}/send`, { method: "POST", cookie: ctx.ec, body: {} });
+    expect(late.status).toBe(409);
+    expect(late.json.error.message).toMatch(/accepted/);
+  }, 120_000);
 
   it("records acceptance of an issued quotation, and refuses it for a lapsed one", async () => {
     const ctx = await setUp();

@@ -10,6 +10,7 @@ const kindLabels: Record<string, string> = {
   "committee-added": "Added to a committee",
   "scheme-shared": "Scheme shared",
   comment: "New comment",
+  tender: "Tender sent",
 };
 
 function Status({ m }: { m: OutboxMessage }) {

@@ -67,7 +67,7 @@ export function QuotationsPanel({ projectId, initial, schemes, rateSets, mayIssu
             <thead className="text-left text-xs uppercase tracking-wide text-tin">
               <tr>
                 <th className="px-4 py-2">Number</th><th className="px-4 py-2">Scheme</th><th className="px-4 py-2">State</th>
-                {mayRead && <th className="px-4 py-2 text-right">Total</th>}
+                {(mayRead || role === "client") && <th className="px-4 py-2 text-right">Total</th>}
                 <th className="px-4 py-2">Valid until</th><th className="px-4 py-2"><span className="sr-only">Documents</span></th>
               </tr>
             </thead>
@@ -78,8 +78,8 @@ export function QuotationsPanel({ projectId, initial, schemes, rateSets, mayIssu
                     {mayRead ? <Link href={`/projects/${projectId}/quotations/${q.id}`} className="underline decoration-tin-rule underline-offset-2 hover:decoration-brass">{q.number}</Link> : q.number}
                   </td>
                   <td className="px-4 py-2">{q.schemeName} <span className="text-xs text-tin">v{q.schemeVersion}</span></td>
-                  <td className="px-4 py-2"><QuoteStatusBadge status={q.status} /></td>
-                  {mayRead && <td className="px-4 py-2 text-right num">{q.totalAmount ? `${currencySymbol(q.currency)}${formatAmount(q.totalAmount)}` : "–"}</td>}
+                  <td className="px-4 py-2"><QuoteStatusBadge status={q.status} />{mayRead && q.sentAt && <span className="ml-2 text-xs text-tin">sent {formatDate(q.sentAt)}</span>}</td>
+                  {(mayRead || role === "client") && <td className="px-4 py-2 text-right num" data-testid="quotation-total">{q.totalAmount ? `${currencySymbol(q.currency)}${formatAmount(q.totalAmount)}` : "–"}</td>}
                   <td className="px-4 py-2 num">{formatDate(q.validUntil)}</td>
                   <td className="whitespace-nowrap px-4 py-2 text-right">
                     {(mayRead || role === "client") && <a className="btn py-1 text-xs" href={`/api/quotations/${q.id}/documents/tender`}>Tender (.docx)</a>}

@@ -171,6 +171,14 @@ export function QuotationEditor({ initial, mayIssue, projectName }: { initial: Q
     onSuccess: (r) => { accept(r); setNotice({ ok: true, text: `Issued. Quotation ${r.quotation.number} is frozen: later changes to the scheme or the rates do not touch it.` }); },
     onError: onServerError,
   });
+  const send = useMutation({
+    mutationFn: () => quoteApi.sendTender(data.id),
+    onSuccess: (r) => {
+      accept(r);
+      setNotice({ ok: true, text: `The tender went to ${r.sentTo} committee ${r.sentTo === 1 ? "member" : "members"} by e-mail, with the Word document attached. They find it and its price on the project page too.` });
+    },
+    onError: onServerError,
+  });
   const decide = useMutation({
     mutationFn: (outcome: "accepted" | "declined") => quoteApi.decide(data.id, outcome),
     onSuccess: (r) => { accept(r); setNotice({ ok: true, text: `Recorded as ${r.quotation.status}.` }); },
@@ -325,6 +333,22 @@ export function QuotationEditor({ initial, mayIssue, projectName }: { initial: Q
               >
                 {issue.isPending ? "Issuing…" : "Issue the quotation"}
               </button>
+            </div>
+          )}
+          {data.status === "issued" && mayIssue && (
+            <div className="flex flex-wrap items-center gap-3">
+              <button
+                type="button"
+                className={data.sentAt ? "btn" : "btn-primary"}
+                disabled={send.isPending}
+                onClick={() => {
+                  const again = data.sentAt ? ` It was sent on ${formatDate(data.sentAt)}; each member gets it again.` : "";
+                  if (window.confirm(`Send tender ${data.number} to the project's committee by e-mail?${again} From then on they see it and its price.`)) send.mutate();
+                }}
+              >
+                {send.isPending ? "Sending…" : data.sentAt ? "Send the tender again" : "Send the tender to the committee"}
+              </button>
+              {data.sentAt && <span className="text-sm text-ink-soft" data-testid="tender-sent">Sent to the committee on {formatDate(data.sentAt)}.</span>}
             </div>
           )}
           {data.status === "issued" && mayIssue && (

@@ -3,6 +3,7 @@ import { CommitteeScheme, type HeadlineFigures } from "@/components/committee/co
 import { SchemeDiscussion } from "@/components/committee/discussion";
 import { SchemeEditor } from "@/components/spec/scheme-editor";
 import { listComments, listNotes } from "@/db/queries/comments";
+import { sentTenderOfScheme } from "@/db/queries/quotations";
 import { keys } from "@/lib/query/keys";
 import { Hydrate, prefetch } from "@/lib/query/server";
 import { can } from "@/lib/roles";
@@ -20,6 +21,7 @@ async function headlineFigures(scheme: SchemeRead): Promise<HeadlineFigures | nu
   if (!r.ok) return null;
   const t = r.estimate.totals;
   return {
+    tender: await sentTenderOfScheme({ schemeId: scheme.id }),
     stops: t.stops,
     ranks: t.ranks,
     pipes: { total: t.pipes.total, new: t.pipes.new, reused: t.pipes.reused, restored: t.pipes.restored },
