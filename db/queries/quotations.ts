@@ -245,11 +245,11 @@ export async function decideQuotation({ user, quotationId, outcome }: { user: Se
 export async function markQuotationSent({ user, quotationId, check }: { user: SessionUser; quotationId: string; check: (projectId: string) => Promise<void> }): Promise<{ read: QuotationRead; project: Project; firstTime: boolean }> {
   const { row, project } = await loadQuotationRow({ user, quotationId });
   assertOpen(project);
-  await check(project.id);
   const status = effectiveStatus(row.status, row.validUntil, todayIso());
   if (status === "draft") throw new AppError("conflict", `Quotation ${row.number} is a draft; issue it before sending the tender.`);
   if (status === "lapsed") throw new AppError("conflict", `Quotation ${row.number} lapsed on ${row.validUntil}; make a new quotation before sending a tender.`);
   if (status !== "issued") throw new AppError("conflict", `Quotation ${row.number} was ${status}; the committee has already answered it.`);
+  await check(project.id);
   const [updated] = await db
     .update(quotations)
     .set({ sentAt: row.sentAt ?? new Date(), updatedAt: new Date() })
