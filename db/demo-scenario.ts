@@ -11,6 +11,8 @@ function stop(id: string, name: string, footage: string, family: StopIn["family"
 }
 
 const manual = { keyboard: "manual" as const, compass: { low: "C", high: "c''''" } };
+/** The 1908 pipes, restored; each stop adds what the survey found. */
+const restored = { origin: "existing", work: ["restored"] } as const satisfies Partial<StopIn>;
 const pedal = { keyboard: "pedal" as const, compass: { low: "C", high: "f'" } };
 
 /** Scheme A: the 1908 two-manual organ of St Aldric's restored much as it stands. */
@@ -22,38 +24,38 @@ export const restoreScheme: SchemeDocumentInput = {
       id: "gt", name: "Great", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 89, unit: "mm" },
       consoleDistanceM: 6, space: { lengthMm: 6200, depthMm: 1450 }, chestWork: "restored",
       stops: [
-        stop("gt-od", "Open Diapason", "8", "principal", { treatment: "restored", scale: { offsetHt: 2 }, offsetBassPipes: 12 }),
-        stop("gt-cl", "Clarabella", "8", "flute", { treatment: "restored", construction: "open", material: "pine" }),
-        stop("gt-du", "Dulciana", "8", "string", { treatment: "restored", scale: { offsetHt: -4 } }),
-        stop("gt-pr", "Principal", "4", "principal", { treatment: "restored" }),
-        stop("gt-hf", "Harmonic Flute", "4", "flute", { treatment: "restored" }),
-        stop("gt-15", "Fifteenth", "2", "principal", { treatment: "restored" }),
-        stop("gt-tr", "Trumpet", "8", "reed", { treatment: "revoiced", construction: "reed-full" }),
+        stop("gt-od", "Open Diapason", "8", "principal", { ...restored, condition: ["feet-collapsing", "split-seams"], scale: { deviationHt: 2 }, offsetBassPipes: 12, bass: { notes: 7, material: "zinc" } }),
+        stop("gt-cl", "Clarabella", "8", "flute", { ...restored, condition: ["wood-split"], construction: "open", material: "pine", bass: { notes: 12, material: "pine", construction: "stopped" } }),
+        stop("gt-du", "Dulciana", "8", "string", { ...restored, scale: { deviationHt: -4 } }),
+        stop("gt-pr", "Principal", "4", "principal", { ...restored, condition: ["feet-collapsing"] }),
+        stop("gt-hf", "Harmonic Flute", "4", "flute", { ...restored }),
+        stop("gt-15", "Fifteenth", "2", "principal", { ...restored, condition: ["tops-torn"] }),
+        stop("gt-tr", "Trumpet", "8", "reed", { origin: "existing", work: ["restored", "revoiced"], condition: ["tongues-worn"], construction: "reed", fluesFrom: "c'''" }),
       ],
     },
     {
       id: "sw", name: "Swell", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 95, unit: "mm" },
-      enclosed: true, consoleDistanceM: 9, space: { lengthMm: 5800, depthMm: 1650 }, chestWork: "restored",
+      enclosed: true, swellBox: { widthMm: 5900, depthMm: 1900, heightMm: 3400 }, consoleDistanceM: 9, space: { lengthMm: 5800, depthMm: 1650 }, chestWork: "restored",
       stops: [
-        stop("sw-ob", "Open Diapason", "8", "principal", { treatment: "restored", offsetBassPipes: 12 }),
-        stop("sw-lg", "Lieblich Gedackt", "8", "flute", { treatment: "restored", construction: "stopped", material: "pine" }),
-        stop("sw-sa", "Salicional", "8", "string", { treatment: "restored", scale: { offsetHt: -6 } }),
-        stop("sw-vc", "Voix Céleste", "8", "string", { treatment: "restored", scale: { offsetHt: -6 }, compass: { low: "c", high: "c''''" } }),
-        stop("sw-ge", "Gemshorn", "4", "principal", { treatment: "restored", construction: "conical" }),
-        stop("sw-mx", "Mixture", "1 1/3", "mixture", { treatment: "restored", ranks: 3, breaks: [
+        stop("sw-ob", "Open Diapason", "8", "principal", { ...restored, offsetBassPipes: 12, bass: { notes: 12, material: "pine", construction: "stopped" } }),
+        stop("sw-lg", "Lieblich Gedackt", "8", "flute", { ...restored, condition: ["woodworm"], construction: "stopped", material: "pine" }),
+        stop("sw-sa", "Salicional", "8", "string", { ...restored, scale: { deviationHt: -6, mouthWidth: 0.2 } }),
+        stop("sw-vc", "Voix Céleste", "8", "string", { ...restored, scale: { deviationHt: -6, mouthWidth: 0.2 }, compass: { low: "c", high: "c''''" } }),
+        stop("sw-ge", "Gemshorn", "4", "principal", { ...restored, construction: "conical" }),
+        stop("sw-mx", "Mixture", "1 1/3", "mixture", { ...restored, condition: ["feet-collapsing"], ranks: 3, breaks: [
           { from: "C", footages: ["1 1/3", "1", "2/3"] },
           { from: "c'", footages: ["2 2/3", "2", "1 1/3"] },
         ] }),
-        stop("sw-cb", "Cornopean", "8", "reed", { treatment: "restored", construction: "reed-full" }),
-        stop("sw-ob2", "Oboe", "8", "reed", { treatment: "restored", construction: "reed-full" }),
+        stop("sw-cb", "Cornopean", "8", "reed", { ...restored, condition: ["tongues-worn", "resonators-damaged"], construction: "reed" }),
+        stop("sw-ob2", "Oboe", "8", "reed", { ...restored, condition: ["tongues-worn"], construction: "reed" }),
       ],
     },
     {
       id: "ped", name: "Pedal", ...pedal, action: "electro-pneumatic", chest: "pitman", chestLayout: "chromatic",
-      windPressure: { value: 100, unit: "mm" }, consoleDistanceM: 12, space: { lengthMm: 7400, depthMm: 1000 }, chestWork: "restored", passageBoard: false,
+      windPressure: { value: 100, unit: "mm" }, consoleDistanceM: 12, space: { lengthMm: 7800, depthMm: 1000 }, chestWork: "restored", passageBoard: false,
       stops: [
-        stop("ped-bd", "Bourdon", "16", "flute", { treatment: "restored", construction: "stopped", material: "pine" }),
-        stop("ped-bf", "Bass Flute", "8", "flute", { treatment: "extension", source: "ped-bd", construction: "stopped", material: "pine" }),
+        stop("ped-bd", "Bourdon", "16", "flute", { ...restored, condition: ["wood-split"], construction: "stopped", material: "pine" }),
+        stop("ped-bf", "Bass Flute", "8", "flute", { origin: "extension", source: "ped-bd", addedPipes: "existing", work: ["restored"], construction: "stopped", material: "pine" }),
       ],
     },
   ],
@@ -68,6 +70,10 @@ export const restoreScheme: SchemeDocumentInput = {
     tremulants: [{ id: "sw-trem", division: "sw" }],
     combination: { memoryLevels: 8, generalPistons: 6, divisionalPistons: 4 },
   },
+  // The 1908 case stays and is restored in place; its front pipes (the Great Open Diapason basses) are cleaned and re-gilded.
+  case: { work: "restored", widthMm: 4800, depthMm: 2600, heightMm: 7000, timber: "pine", speakingFrontPipes: 23, gildingM2: 2.5 },
+  wind: { work: "restored", blower: "new" },
+  site: { distanceKm: 35, scaffold: true },
 };
 
 /** Scheme B: the same organ rebuilt and enlarged with a new Choir and a fuller Pedal. */
@@ -96,23 +102,23 @@ export const enlargeScheme: SchemeDocumentInput = {
       enclosed: true, consoleDistanceM: 8, space: { lengthMm: 5800, depthMm: 1350 },
       stops: [
         stop("ch-sd", "Stopped Diapason", "8", "flute", { construction: "stopped", material: "oak" }),
-        stop("ch-dl", "Dulciana", "8", "string", { treatment: "relocated", scale: { offsetHt: -4 } }),
+        stop("ch-dl", "Dulciana", "8", "string", { origin: "existing", work: ["relocated", "revoiced"], scale: { deviationHt: -4 } }),
         stop("ch-cf", "Chimney Flute", "4", "flute", { construction: "half-stopped" }),
         stop("ch-na", "Nazard", "2 2/3", "mutation", { construction: "half-stopped" }),
         stop("ch-pi", "Piccolo", "2", "flute"),
         stop("ch-ti", "Tierce", "1 3/5", "mutation"),
-        stop("ch-cr", "Clarinet", "8", "reed", { construction: "reed-half" }),
+        stop("ch-cr", "Clarinet", "8", "reed", { construction: "reed", resonator: { length: "half", shape: "cylindrical" } }),
       ],
     },
     {
       // The same Pedal space as scheme A: the new basses and the Trombone do not fit its depth.
       ...restoreScheme.divisions![2]!,
       stops: [
-        stop("ped-ow", "Open Wood", "16", "flute", { material: "pine", scale: { offsetHt: 4 }, offsetBassPipes: 0 }),
+        stop("ped-ow", "Open Wood", "16", "flute", { material: "pine", scale: { deviationHt: 4 }, offsetBassPipes: 0 }),
         ...restoreScheme.divisions![2]!.stops!,
         stop("ped-pr", "Principal", "8", "principal", { material: "zinc" }),
-        stop("ped-tb", "Trombone", "16", "reed", { construction: "reed-full", material: "zinc" }),
-        stop("ped-tp", "Trumpet", "8", "reed", { treatment: "extension", source: "ped-tb", construction: "reed-full", material: "zinc" }),
+        stop("ped-tb", "Trombone", "16", "reed", { construction: "reed", material: "zinc", bass: { notes: 12, material: "pine" } }),
+        stop("ped-tp", "Trumpet", "8", "reed", { origin: "extension", source: "ped-tb", construction: "reed", material: "zinc" }),
       ],
     },
   ],
@@ -128,6 +134,8 @@ export const enlargeScheme: SchemeDocumentInput = {
     tremulants: [{ id: "sw-trem", division: "sw" }, { id: "ch-trem", division: "ch" }],
     combination: { memoryLevels: 256, generalPistons: 8, divisionalPistons: 6 },
   },
+  // A larger organ needs more wind: new reservoirs and trunking as well as the new blower.
+  wind: { work: "new", blower: "new" },
 };
 
 /** The large invented example (five manuals and pedal, about 150 stops) from examples/. */

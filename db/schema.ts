@@ -135,6 +135,8 @@ export const schemes = pgTable(
     version: integer("version").notNull().default(1),
     copiedFromId: uuid("copied_from_id").references((): AnyPgColumn => schemes.id, { onDelete: "set null" }),
     accessories: jsonb("accessories").notNull().default({}),
+    /** The case, the wind system and the site (lib/estimate/scheme.ts caseSchema, windSchema, siteSchema). */
+    works: jsonb("works").notNull().default({}),
     updatedById: uuid("updated_by_id").references(() => users.id),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
@@ -168,6 +170,7 @@ export const stops = pgTable(
     divisionId: text("division_id").notNull(),
     position: text("position").notNull(),
     name: text("name").notNull(),
+    /** What happens to the stop, in a word (dispositionOf in lib/estimate/scheme.ts): "new", "restored+revoiced", "extension" … */
     treatment: text("treatment").notNull(),
     props: jsonb("props").notNull(),
   },

@@ -5,6 +5,7 @@
 import { asc, and, eq, notInArray, sql } from "drizzle-orm";
 import type { NodePgQueryResultHKT } from "drizzle-orm/node-postgres";
 import type { PgDatabase } from "drizzle-orm/pg-core";
+import { dispositionOf } from "../lib/estimate/scheme";
 import { schemeDocumentSchema, type DocDivision, type DocStop, type SchemeDocument } from "../lib/spec/document";
 import { assignPositions } from "../lib/spec/ordering";
 import * as schema from "./schema";
@@ -15,6 +16,11 @@ export type Store = PgDatabase<NodePgQueryResultHKT, typeof schema>;
 
 type Accessories = SchemeDocument["accessories"];
 const emptyAccessories = schemeDocumentSchema.shape.accessories.parse(undefined) as Accessories;
+
+/** The organ's work beyond its divisions, kept together in one column. */
+export function worksOf(doc: SchemeDocument) {
+  return { case: doc.case, wind: doc.wind, site: doc.site };
+}
 
 // ── rows ↔ document ──────────────────────────────────────────────────────────────────────────
 
@@ -37,12 +43,17 @@ export async function loadDocument(tx: Store, scheme: Scheme): Promise<SchemeDoc
     list.push(stopFromRow(s));
     byDivision.set(s.divisionId, list);
   }
-  return {
+  const works = (scheme.works ?? {}) as Partial<Pick<SchemeDocument, "case" | "wind" | "site">>;
+  const raw = {
     name: scheme.name,
     description: scheme.description,
     divisions: divRows.map((d) => divisionFromRow(d, byDivision.get(d.id) ?? [])),
     accessories: { ...emptyAccessories, ...(scheme.accessories as Partial<Accessories>) },
+    ...works,
   };
+  // Read through the scheme model: stops saved in an earlier format are upgraded, new fields take their defaults.
+  const parsed = schemeDocumentSchema.safeParse(raw);
+  return parsed.success ? parsed.data : (raw as SchemeDocument);
 }
 
 /** Replaces the scheme's divisions and stops with the document's, rewriting only moved rows' positions. */
@@ -70,7 +81,7 @@ export async function writeDocument(tx: Store, schemeId: string, doc: SchemeDocu
     // A stop keeps its key only while it stays in the same division.
     const previous = new Map(oldStops.filter((s) => s.divisionId === d.id).map((s) => [s.id, s.position]));
     const positions = assignPositions(d.stops.map((s) => s.id), previous);
-    return d.stops.map(({ id, name, ...props }) => ({ schemeId, id, name, divisionId: d.id, position: positions.get(id)!, treatment: props.treatment, props }));
+    return d.stops.map(({ id, name, ...props }) => ({ schemeId, id, name, divisionId: d.id, position: positions.get(id)!, treatment: dispositionOf(props), props }));
   });
   await tx
     .insert(stops)
@@ -95,6 +106,7 @@ export async function insertScheme(
       name: v.document.name,
       description: v.document.description,
       accessories: v.document.accessories,
+      works: worksOf(v.document),
       copiedFromId: v.copiedFromId ?? null,
       updatedById: v.authorId,
     })

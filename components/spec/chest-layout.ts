@@ -1,12 +1,12 @@
 /**
- * Where every pipe of a division stands on its chest, for the plan drawing. Follows the estimator's
- * rules (lib/estimate/chest.ts): each pipe takes its footprint plus a clearance; a C/C♯ chest puts the
- * C side and the C♯ side on two half-chests, basses at the outer ends; rows are as deep as their
- * largest pipe plus clearance. Diameters come from the estimator's per-pipe geometry.
+ * Where every pipe of a division stands on its chest, for the plan drawing. The rule is the
+ * estimator's own (lib/estimate/chest.ts: rowOf, chestSize, placeRow) applied to the estimator's
+ * per-pipe geometry (pipesOfStop), so the drawing and the figures cannot disagree; a test holds them
+ * equal on the example schemes.
  */
-import { clearanceMm } from "@/lib/estimate";
-import { pipesOfStop, planScheme, type PipeDetail, type Scheme } from "@/lib/estimate";
-import type { DrawingRules } from "@/lib/spec/estimate";
+import {
+  chestSize, pipesOfStop, placeRow, planScheme, rowDepthMm, rowOf, type ChestSize, type PipeDetail, type Rates, type RowPipe, type Scheme,
+} from "@/lib/estimate";
 
 export type PlacedPipe = {
   x: number;
@@ -31,10 +31,10 @@ export type ChestPlan = {
   offset: { lengthMm: number; depthMm: number; rows: LaidRow[] } | null;
 };
 
-type Piece = { key: number; keyName: string; footprint: number; diameter: number; wood: boolean; prepared: boolean; offset: boolean; channel: number };
+type Piece = RowPipe & { key: number; keyName: string; wood: boolean; prepared: boolean; offset: boolean };
 
 /** Lays out the chest of division `divisionId`; null when it has no pipes on a chest. */
-export function layChest(scheme: Scheme, divisionId: string, rates: DrawingRules): ChestPlan | null {
+export function layChest(scheme: Scheme, divisionId: string, rates: Rates): ChestPlan | null {
   const plan = planScheme(scheme);
   if (plan.messages.length) return null;
   const dIndex = plan.divisions.findIndex((d) => d.division.id === divisionId);
@@ -63,10 +63,11 @@ export function layChest(scheme: Scheme, divisionId: string, rates: DrawingRules
       const key = seg.fromKey + i;
       const d = m.get(`${rank}:${key}`);
       if (!d) continue;
-      const wood = d.sideMm !== null;
-      const footprint = wood ? d.sideMm! + 2 * rates.boardThicknessMm[d.sizeClass] : d.diameterMm;
       const list = byRow.get(seg.row) ?? [];
-      list.push({ key, keyName: d.key, footprint, diameter: d.diameterMm, wood, prepared: !seg.made, offset: i < seg.offsetCount, channel: key + seg.channelOffset });
+      list.push({
+        key, keyName: d.key, footprintMm: d.footprintMm, diameterMm: d.diameterMm, wood: d.sideMm !== null, prepared: d.state === "prepared",
+        offset: i < seg.offsetCount, channel: key + seg.channelOffset,
+      });
       byRow.set(seg.row, list);
     }
   }
@@ -79,76 +80,36 @@ export function layChest(scheme: Scheme, divisionId: string, rates: DrawingRules
     return `${sp.stop.name} ${sp.footageText}′${ranks}`;
   };
 
-  const width = (p: Piece) => p.footprint + clearanceMm(p.diameter, n);
   const rowIds = [...byRow.keys()].sort((a, b) => a - b);
-  const end = n.endBoardMm;
+  const pieces = rowIds.map((id) => ({ id, all: byRow.get(id)!.sort((a, b) => a.key - b.key) }));
+  const mainRows = pieces.map((p) => ({ ...p, pipes: p.all.filter((q) => !q.offset) })).filter((p) => p.pipes.length);
+  const offRows = pieces.map((p) => ({ ...p, pipes: p.all.filter((q) => q.offset) })).filter((p) => p.pipes.length);
+  const size: ChestSize = chestSize(mainRows.map((r) => rowOf(r.pipes, division.chestLayout, n)), division.chestLayout, division.passageBoard, n);
+  const offSize = offRows.length ? chestSize(offRows.map((r) => rowOf(r.pipes, "chromatic", n)), "chromatic", false, n) : null;
 
-  // First pass: lengths of the halves, so the C♯ half can be drawn from its outer end inward.
-  let longestC = 0;
-  let longestCs = 0;
-  let longestWhole = 0;
-  for (const id of rowIds) {
-    const main = byRow.get(id)!.filter((p) => !p.offset);
-    const c = main.filter((p) => (p.channel & 1) === 0).reduce((s, p) => s + width(p), 0);
-    const cs = main.filter((p) => (p.channel & 1) === 1).reduce((s, p) => s + width(p), 0);
-    longestC = Math.max(longestC, c);
-    longestCs = Math.max(longestCs, cs);
-    longestWhole = Math.max(longestWhole, c + cs);
-  }
-  const chromatic = division.chestLayout === "chromatic";
-  const lengthMm = chromatic ? longestWhole + 2 * end : longestC + longestCs + 4 * end;
-  const splitMm = chromatic ? null : longestC + 2 * end;
-
-  const rows: LaidRow[] = [];
-  const offsetRows: LaidRow[] = [];
-  let y = 0;
-  let oy = 0;
-  let offsetLength = 0;
-  for (const id of rowIds) {
-    const pieces = byRow.get(id)!.sort((a, b) => a.key - b.key);
-    const main = pieces.filter((p) => !p.offset);
-    const off = pieces.filter((p) => p.offset);
-    if (main.length) {
-      const largest = main.reduce((a, p) => (p.footprint > a.footprint ? p : a), main[0]);
-      const depth = largest.footprint + clearanceMm(largest.diameter, n);
-      const cy = y + depth / 2;
-      const placed: PlacedPipe[] = [];
-      const place = (p: Piece, x: number) => placed.push({ x, y: cy, size: p.footprint, wood: p.wood, prepared: p.prepared, key: p.keyName });
-      if (chromatic) {
-        let x = end;
-        for (const p of main) { place(p, x + width(p) / 2); x += width(p); }
-      } else {
-        // C side: bass at the left end, rising toward the middle; C♯ side mirrored from the right end.
-        let x = end;
-        for (const p of main.filter((q) => (q.channel & 1) === 0)) { place(p, x + width(p) / 2); x += width(p); }
-        let xr = lengthMm - end;
-        for (const p of main.filter((q) => (q.channel & 1) === 1)) { place(p, xr - width(p) / 2); xr -= width(p); }
-      }
-      rows.push({ label: labelOf(id), y, depth, pipes: placed });
+  const lay = (rows: typeof mainRows, s: ChestSize): LaidRow[] => {
+    let y = 0;
+    return rows.map((r) => {
+      const row = rowOf(r.pipes, s.layout, n);
+      const depth = rowDepthMm(row.largestFootprintMm, row.largestDiameterMm, n);
+      const xs = placeRow(r.pipes, s, n);
+      const laid: LaidRow = {
+        label: labelOf(r.id), y, depth,
+        pipes: r.pipes.map((p, i) => ({ x: xs[i], y: y + depth / 2, size: p.footprintMm, wood: p.wood, prepared: p.prepared, key: p.keyName })),
+      };
       y += depth;
-    }
-    if (off.length) {
-      const largest = off.reduce((a, p) => (p.footprint > a.footprint ? p : a), off[0]);
-      const depth = largest.footprint + clearanceMm(largest.diameter, n);
-      let x = end;
-      const placed: PlacedPipe[] = [];
-      for (const p of off) {
-        placed.push({ x: x + width(p) / 2, y: oy + depth / 2, size: p.footprint, wood: p.wood, prepared: p.prepared, key: p.keyName });
-        x += width(p);
-      }
-      offsetLength = Math.max(offsetLength, x + end);
-      offsetRows.push({ label: labelOf(id), y: oy, depth, pipes: placed });
-      oy += depth;
-    }
-  }
+      return laid;
+    });
+  };
+
   const passageMm = division.passageBoard ? n.passageBoardMm : 0;
   return {
     layout: division.chestLayout,
-    lengthMm,
-    depthMm: y + passageMm,
-    splitMm,
+    lengthMm: size.lengthMm,
+    depthMm: size.depthMm,
+    splitMm: size.halvesMm ? size.halvesMm[0] : null,
     passageMm,
-    rows,
-    offset: offsetRows.length ? { lengthMm: offsetLength, depthMm: oy, rows: offsetRows } : null,
+    rows: lay(mainRows, size),
+    offset: offSize ? { lengthMm: offSize.lengthMm, depthMm: offSize.depthMm, rows: lay(offRows, offSize) } : null,
   };
 }

@@ -255,7 +255,7 @@ export function DivisionBoard({
               {activeStop.name}
               <Pitch stop={activeStop} className="ml-auto" />
             </div>
-            <div className="text-xs text-ink-soft"><Treatment treatment={activeStop.treatment} /></div>
+            <div className="text-xs text-ink-soft"><Treatment stop={activeStop} /></div>
           </div>
         ) : activeDivision ? (
           <div className="w-72 rounded-md border border-brass bg-paper-deep px-3 py-2 shadow-lg">

@@ -1,7 +1,7 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { actions, chestTypes, divisionSchema } from "@/lib/estimate/scheme";
 import type { DocDivision } from "@/lib/spec/document";
@@ -44,9 +44,11 @@ export function DivisionForm({
     stops: [],
   };
   const [spaceKnown, setSpaceKnown] = useState(!!initial?.space);
+  const [boxKnown, setBoxKnown] = useState(!!initial?.swellBox);
   const form = useForm<DivIn, unknown, DivOut>({ resolver: zodResolver(divisionSchema), defaultValues: start, shouldUnregister: true });
-  const { register, handleSubmit, formState, setValue } = form;
+  const { register, handleSubmit, formState, setValue, control } = form;
   const err = formState.errors;
+  const enclosed = useWatch({ control, name: "enclosed" });
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate aria-label={initial ? `Edit division ${initial.name}` : "New division"} className="space-y-3">
@@ -149,6 +151,31 @@ export function DivisionForm({
           Space in the case is known
         </label>
       </div>
+      {enclosed && (
+        <label className="inline-flex items-center gap-2 text-sm">
+          <input type="checkbox" className="accent-brass" checked={boxKnown} onChange={(e) => setBoxKnown(e.target.checked)} />
+          Swell box size is known (otherwise sized round the chest and its tallest pipe)
+        </label>
+      )}
+      {enclosed && boxKnown && (
+        <div className="grid grid-cols-3 gap-3" data-testid="swell-box-size">
+          <div>
+            <label className="label" htmlFor="div-box-width">Swell box inside width in mm</label>
+            <input id="div-box-width" type="number" min={1} className="field num" defaultValue={initial?.swellBox?.widthMm} aria-invalid={!!err.swellBox?.widthMm} {...register("swellBox.widthMm", { valueAsNumber: true })} />
+            <Err e={err.swellBox?.widthMm} />
+          </div>
+          <div>
+            <label className="label" htmlFor="div-box-depth">inside depth in mm</label>
+            <input id="div-box-depth" type="number" min={1} className="field num" defaultValue={initial?.swellBox?.depthMm} aria-invalid={!!err.swellBox?.depthMm} {...register("swellBox.depthMm", { valueAsNumber: true })} />
+            <Err e={err.swellBox?.depthMm} />
+          </div>
+          <div>
+            <label className="label" htmlFor="div-box-height">inside height in mm</label>
+            <input id="div-box-height" type="number" min={1} className="field num" defaultValue={initial?.swellBox?.heightMm} aria-invalid={!!err.swellBox?.heightMm} {...register("swellBox.heightMm", { valueAsNumber: true })} />
+            <Err e={err.swellBox?.heightMm} />
+          </div>
+        </div>
+      )}
       {spaceKnown && (
         <div className="grid grid-cols-2 gap-3">
           <div>

@@ -1,9 +1,12 @@
-/** How the trade writes pitches, compasses and treatments: shared by the editor, the stop list and the drawings. */
-import { actions, chestTypes, families, constructions, materials, treatments, type Treatment } from "@/lib/estimate/scheme";
+/** How the trade writes pitches, compasses and what happens to each stop: shared by the editor, the stop list and the drawings. */
+import {
+  actions, chestTypes, families, constructions, findings, materials, origins, pipeWorks, resonatorLengths,
+  type Finding, type Origin, type PipeWork,
+} from "@/lib/estimate/scheme";
 import { formatFootage, parseFootage } from "@/lib/estimate";
 import { groupThousands } from "@/lib/spec/digits";
 
-type StopLike = { footage: string | number; ranks?: number; family: string };
+type StopLike = { footage: string | number; ranks?: number; family: string; breaks?: readonly { footages: readonly (string | number | null)[] }[] };
 
 const ROMAN: ReadonlyArray<[number, string]> = [
   [10, "X"], [9, "IX"], [5, "V"], [4, "IV"], [1, "I"],
@@ -32,10 +35,21 @@ export function isValidFootage(footage: string | number): boolean {
   return parseFootage(footage) !== null;
 }
 
-/** A stop's pitch as a stop list gives it: "8′", "2⅔′", a mixture's ranks "IV", a compound stop "2⅔′ II". */
+/** Fewest and most ranks sounding on one key of a mixture's breaks (they differ in a progressive mixture, III–V). */
+export function rankSpan(stop: StopLike): [number, number] {
+  const ranks = stop.ranks ?? 1;
+  if (!stop.breaks?.length) return [ranks, ranks];
+  const sounding = stop.breaks.map((b) => b.footages.filter((f) => f !== null && f !== "").length);
+  return [Math.min(...sounding), Math.max(...sounding)];
+}
+
+/** A stop's pitch as a stop list gives it: "8′", "2⅔′", a mixture's ranks "IV" or "III–V", a compound stop "2⅔′ II". */
 export function pitchText(stop: StopLike): string {
   const ranks = stop.ranks ?? 1;
-  if (stop.family === "mixture") return romanNumeral(Math.max(ranks, 1));
+  if (stop.family === "mixture") {
+    const [lo, hi] = rankSpan(stop);
+    return lo !== hi && lo > 0 ? `${romanNumeral(lo)}–${romanNumeral(hi)}` : romanNumeral(Math.max(ranks, 1));
+  }
   if (ranks > 1) return `${footageText(stop.footage)} ${romanNumeral(ranks)}`;
   return footageText(stop.footage);
 }
@@ -49,17 +63,63 @@ export function compassText(c: { low: string; high: string }): string {
   return `${noteText(c.low)}–${noteText(c.high)}`;
 }
 
-export const treatmentLabels: Record<Treatment, string> = {
+/** Where a stop's pipes come from. */
+export const originLabels: Record<Origin, string> = {
   new: "New",
-  retained: "Retained",
-  restored: "Restored",
-  revoiced: "Revoiced",
-  relocated: "Relocated",
+  existing: "Existing",
   extension: "Extension",
   borrowed: "Borrowed",
   prepared: "Prepared for",
   removed: "Removed",
 };
+
+/** Work on existing pipes. */
+export const pipeWorkLabels: Record<PipeWork, string> = {
+  restored: "Restored",
+  revoiced: "Revoiced",
+  relocated: "Relocated",
+  rescaled: "Re-scaled",
+};
+
+/** What a survey found in an existing rank. */
+export const findingLabels: Record<Finding, string> = {
+  "feet-collapsing": "Feet collapsing",
+  "split-seams": "Split seams",
+  "mouths-damaged": "Mouths damaged",
+  "tops-torn": "Tops torn or split",
+  "wood-split": "Wood split or glue failed",
+  woodworm: "Woodworm",
+  "tongues-worn": "Reed tongues worn",
+  "resonators-damaged": "Resonators damaged",
+};
+
+export const resonatorLengthLabels: Record<(typeof resonatorLengths)[number], string> = {
+  full: "Full length",
+  half: "Half length",
+  quarter: "Quarter length",
+  eighth: "Eighth length",
+  sixteenth: "Sixteenth length",
+};
+
+/** The mark a stop carries: its origin, or for existing pipes the main work on them. */
+export type DispositionMark = "new" | "retained" | "restored" | "revoiced" | "relocated" | "rescaled" | "extension" | "borrowed" | "prepared" | "removed";
+
+type DispositionLike = { origin: Origin; work?: readonly PipeWork[]; addedPipes?: "new" | "existing" };
+
+export function dispositionMark(stop: DispositionLike): DispositionMark {
+  if (stop.origin !== "existing") return stop.origin;
+  const work = stop.work ?? [];
+  for (const w of pipeWorks) if (work.includes(w)) return w;
+  return "retained";
+}
+
+/** What happens to a stop in words: "New", "Existing: restored, revoiced", "Existing, kept as it is", "Extension (existing pipes)". */
+export function dispositionText(stop: DispositionLike): string {
+  const work = [...(stop.work ?? [])].sort((a, b) => pipeWorks.indexOf(a) - pipeWorks.indexOf(b)).map((w) => pipeWorkLabels[w].toLowerCase());
+  if (stop.origin === "existing") return work.length ? `Existing: ${work.join(", ")}` : "Existing, kept as it is";
+  if (stop.origin === "extension" && stop.addedPipes === "existing") return `Extension (existing pipes${work.length ? `, ${work.join(", ")}` : ""})`;
+  return originLabels[stop.origin];
+}
 
 export const familyLabels: Record<(typeof families)[number], string> = {
   principal: "Principal",
@@ -76,9 +136,8 @@ export const constructionLabels: Record<(typeof constructions)[number], string> 
   stopped: "Stopped",
   "half-stopped": "Half-stopped (chimney)",
   conical: "Conical",
-  capped: "Capped",
-  "reed-full": "Reed, full-length resonator",
-  "reed-half": "Reed, half-length resonator",
+  capped: "Capped (speaks as stopped)",
+  reed: "Reed",
 };
 
 export const materialLabels: Record<(typeof materials)[number], string> = {
@@ -106,10 +165,11 @@ export const chestTypeLabels: Record<(typeof chestTypes)[number], string> = {
   ventil: "Ventil chest",
 };
 
-export const workLabels: Record<"new" | "restored" | "retained", string> = {
+export const workLabels: Record<"new" | "restored" | "retained" | "none", string> = {
   new: "New",
   restored: "Restored",
   retained: "Retained as is",
+  none: "Not part of the work",
 };
 
 export function windText(w: { value: number; unit: "mm" | "in" }): string {
@@ -150,7 +210,8 @@ export function formatTimeOfDay(iso: string): string {
   return d.toDateString() === new Date().toDateString() ? time : `${d.toLocaleDateString("en-GB", { day: "numeric", month: "short" })}, ${time}`;
 }
 
-export const treatmentOrder = treatments;
+export const originOrder = origins;
+export const findingOrder = findings;
 
 /** "Swell to Great", "Swell Octave", "Swell to Pedal Sub Octave": the trade's names for couplers. */
 export function couplerName(c: { from: string; to: string; octave: -1 | 0 | 1 }, divisions: readonly { id: string; name: string }[]): string {

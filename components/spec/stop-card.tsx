@@ -57,7 +57,7 @@ export function DragHandle({
  * step; keeping the body memoised (primitive props, stable stop objects) keeps a 150-stop board quick.
  */
 const CardBody = memo(function CardBody({ stop, pipesText, onEdit }: { stop: DocStop; pipesText: string; onEdit?: (stopId: string) => void }) {
-  const removed = stop.treatment === "removed";
+  const removed = stop.origin === "removed";
   return (
     <div className="min-w-0 flex-1">
       <div className="flex items-baseline gap-2">
@@ -71,7 +71,7 @@ const CardBody = memo(function CardBody({ stop, pipesText, onEdit }: { stop: Doc
         <Pitch stop={stop} className="ml-auto font-serif text-[15px]" />
       </div>
       <div className="mt-0.5 flex items-center gap-2 text-xs text-ink-soft">
-        <Treatment treatment={stop.treatment} />
+        <Treatment stop={stop} />
         <span className="num ml-auto text-tin">{pipesText}</span>
       </div>
     </div>

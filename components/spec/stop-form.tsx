@@ -3,23 +3,26 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { Controller, useFieldArray, useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
-import { constructions, families, materials, stopSchema, treatments } from "@/lib/estimate/scheme";
+import { constructions, families, findings, flueConstructions, materials, origins, pipeWorks, resonatorLengths, stopFormSchema } from "@/lib/estimate/scheme";
 import type { DocStop } from "@/lib/spec/document";
-import { constructionLabels, familyLabels, isValidFootage, materialLabels, pitchText, treatmentLabels } from "./format";
+import {
+  constructionLabels, familyLabels, findingLabels, isValidFootage, materialLabels, originLabels, pipeWorkLabels, pitchText, resonatorLengthLabels,
+} from "./format";
 import { stopPresets, type StopFields } from "./presets";
 
-type StopIn = z.input<typeof stopSchema>;
-type StopOut = z.output<typeof stopSchema>;
+type StopIn = z.input<typeof stopFormSchema>;
+type StopOut = z.output<typeof stopFormSchema>;
 
 const FOOTAGE_HINT = "Not a footage: write a whole number of feet or a fraction, e.g. 8, 2 2/3 (or 2⅔), 1 3/5.";
+const SILENT = "–";
 
 function Err({ e }: { e?: { message?: string } }) {
   return e?.message ? <p className="field-error"><span aria-hidden="true">✕ </span>{e.message}</p> : null;
 }
 
-/** A comma-separated list of footages for one break of a mixture: "2, 1 1/3, 1". */
-function FootageList({ value, onChange, id, invalid }: { value: unknown; onChange: (v: string[]) => void; id: string; invalid: boolean }) {
-  const [text, setText] = useState(() => (Array.isArray(value) ? value.join(", ") : ""));
+/** A comma-separated list of footages for one break of a mixture: "2, 1 1/3, 1"; a dash for a rank silent there. */
+function FootageList({ value, onChange, id, invalid }: { value: unknown; onChange: (v: (string | null)[]) => void; id: string; invalid: boolean }) {
+  const [text, setText] = useState(() => (Array.isArray(value) ? value.map((f) => (f === null ? SILENT : f)).join(", ") : ""));
   return (
     <input
       id={id}
@@ -28,11 +31,14 @@ function FootageList({ value, onChange, id, invalid }: { value: unknown; onChang
       aria-invalid={invalid}
       onChange={(e) => {
         setText(e.target.value);
-        onChange(e.target.value.split(",").map((s) => s.trim()).filter(Boolean));
+        onChange(e.target.value.split(",").map((s) => s.trim()).filter(Boolean).map((s) => (/^[-–—]$/.test(s) ? null : s)));
       }}
     />
   );
 }
+
+const optionalNumber = (v: unknown) => (v === "" || v === null || v === undefined ? undefined : Number(v));
+const optionalText = (v: unknown) => (v === "" ? undefined : v);
 
 export type SourceOption = { id: string; label: string };
 
@@ -52,15 +58,25 @@ export function StopForm({
   onCancel: () => void;
   onDelete?: () => void;
 }) {
-  const start: StopIn = initial ?? { id: newId, name: "", footage: "8", ranks: 1, family: "principal", construction: "open", material: "spotted", treatment: "new", scale: { offsetHt: 0, halvingOn: 17, mouthWidth: 0.25 }, offsetBassPipes: 0 };
+  const start: StopIn = initial ?? {
+    id: newId, name: "", footage: "8", ranks: 1, family: "principal", construction: "open", material: "spotted", origin: "new", work: [], condition: [],
+    scale: { deviationHt: 0, halvingOn: 17, mouthWidth: 0.25 }, offsetBassPipes: 0,
+  };
   const [ownCompass, setOwnCompass] = useState(!!initial?.compass);
   const [withBreaks, setWithBreaks] = useState(!!initial?.breaks?.length);
-  const form = useForm<StopIn, unknown, StopOut>({ resolver: zodResolver(stopSchema), defaultValues: start, shouldUnregister: true });
+  const [withBass, setWithBass] = useState(!!initial?.bass);
+  const form = useForm<StopIn, unknown, StopOut>({ resolver: zodResolver(stopFormSchema), defaultValues: start, shouldUnregister: true });
   const { register, handleSubmit, control, formState, setError, reset } = form;
   const breaks = useFieldArray({ control, name: "breaks" });
-  const [treatment, family, ranks, name, footage] = useWatch({ control, name: ["treatment", "family", "ranks", "name", "footage"] });
+  const [origin, family, ranks, name, footage, construction, addedPipes, work, breakValues] = useWatch({
+    control, name: ["origin", "family", "ranks", "name", "footage", "construction", "addedPipes", "work", "breaks"],
+  });
   const err = formState.errors;
-  const needsSource = treatment === "extension" || treatment === "borrowed";
+  const needsSource = origin === "extension" || origin === "borrowed";
+  const existingPipes = origin === "existing" || (origin === "extension" && addedPipes === "existing");
+  const works = Array.isArray(work) ? work : [];
+  const reed = construction === "reed";
+  const ownRank = origin === "new" || origin === "existing" || origin === "prepared";
 
   function applyPreset(key: string) {
     const p = stopPresets.find((x) => x.key === key);
@@ -68,7 +84,8 @@ export function StopForm({
     const fields: StopFields = p.stop;
     setOwnCompass(!!fields.compass);
     setWithBreaks(!!fields.breaks?.length);
-    reset({ offsetBassPipes: 0, ranks: 1, treatment: treatment ?? "new", ...fields, id: initial?.id ?? newId });
+    setWithBass(!!fields.bass);
+    reset({ offsetBassPipes: 0, ranks: 1, origin: origin ?? "new", work: [], condition: [], ...fields, id: initial?.id ?? newId });
   }
 
   const submit = handleSubmit((stop) => {
@@ -79,9 +96,9 @@ export function StopForm({
     }
     stop.breaks?.forEach((b, i) => {
       if (b.footages.length !== stop.ranks) {
-        setError(`breaks.${i}.footages`, { type: "validate", message: `Give one footage for each of the ${stop.ranks} ranks.` });
+        setError(`breaks.${i}.footages`, { type: "validate", message: `Give one footage (or ${SILENT} for a silent rank) for each of the ${stop.ranks} ranks.` });
         bad = true;
-      } else if (!b.footages.every(isValidFootage)) {
+      } else if (!b.footages.every((f) => f === null || isValidFootage(f))) {
         setError(`breaks.${i}.footages`, { type: "validate", message: FOOTAGE_HINT });
         bad = true;
       }
@@ -90,10 +107,14 @@ export function StopForm({
       setError("source", { type: "validate", message: "Choose the stop whose rank it draws on." });
       bad = true;
     }
+    if (stop.work.includes("rescaled") && stop.rescaleHt === 0) {
+      setError("rescaleHt", { type: "validate", message: "Give the semitones the pipes move: + up (wider), − down (narrower)." });
+      bad = true;
+    }
     if (!bad) onSubmit(stop);
   });
 
-  const preview = name ? `${name} ${pitchText({ footage: footage ?? "", ranks: Number(ranks) || 1, family: family ?? "principal" })}` : "";
+  const preview = name ? `${name} ${pitchText({ footage: footage ?? "", ranks: Number(ranks) || 1, family: family ?? "principal", breaks: withBreaks ? breakValues : undefined })}` : "";
 
   return (
     <form onSubmit={submit} noValidate aria-label={initial ? `Edit stop ${initial.name}` : "New stop"} className="space-y-3">
@@ -150,31 +171,110 @@ export function StopForm({
           </select>
         </div>
       </div>
-      <div className="grid gap-3 sm:grid-cols-2">
-        <div>
-          <label className="label" htmlFor="stop-treatment">Treatment</label>
-          <select id="stop-treatment" className="field" {...register("treatment")}>
-            {treatments.map((t) => <option key={t} value={t}>{treatmentLabels[t]}</option>)}
-          </select>
-        </div>
-        {needsSource && (
+
+      <fieldset className="rounded border border-tin-rule p-3">
+        <legend className="px-1 text-xs font-semibold uppercase tracking-wide text-tin">Pipes and work</legend>
+        <div className="grid gap-3 sm:grid-cols-3">
           <div>
-            <label className="label" htmlFor="stop-source">{treatment === "extension" ? "Extends the rank of" : "Borrowed from"}</label>
-            <select id="stop-source" className="field" aria-invalid={!!err.source} {...register("source", { setValueAs: (v: unknown) => (v === "" ? undefined : v) })}>
-              <option value="">— choose a stop —</option>
-              {sources.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
+            <label className="label" htmlFor="stop-origin">Pipes</label>
+            <select id="stop-origin" className="field" {...register("origin")}>
+              {origins.map((o) => <option key={o} value={o}>{originLabels[o]}</option>)}
             </select>
-            <Err e={err.source} />
+          </div>
+          {needsSource && (
+            <div>
+              <label className="label" htmlFor="stop-source">{origin === "extension" ? "Extends the rank of" : "Borrowed from"}</label>
+              <select id="stop-source" className="field" aria-invalid={!!err.source} {...register("source", { setValueAs: optionalText })}>
+                <option value="">— choose a stop —</option>
+                {sources.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
+              </select>
+              <Err e={err.source} />
+            </div>
+          )}
+          {origin === "extension" && (
+            <div>
+              <label className="label" htmlFor="stop-added">The notes it adds</label>
+              <select id="stop-added" className="field" {...register("addedPipes")}>
+                <option value="new">New pipes</option>
+                <option value="existing">Existing pipes</option>
+              </select>
+            </div>
+          )}
+        </div>
+        {existingPipes && (
+          <div className="mt-2 space-y-2" data-testid="stop-work">
+            <p className="text-xs text-tin">Work on the existing pipes (none ticked: cleaned and kept as they are):</p>
+            <div className="flex flex-wrap gap-4 text-sm">
+              {pipeWorks.map((w) => (
+                <label key={w} className="inline-flex items-center gap-2">
+                  <input type="checkbox" className="accent-brass" value={w} {...register("work")} />
+                  {pipeWorkLabels[w]}
+                </label>
+              ))}
+            </div>
+            {works.includes("rescaled") && (
+              <div className="w-48">
+                <label className="label" htmlFor="stop-rescale">Pipes move (semitones)</label>
+                <input id="stop-rescale" type="number" step="1" min={-12} max={12} className="field num" aria-invalid={!!err.rescaleHt} {...register("rescaleHt", { valueAsNumber: true })} />
+                <Err e={err.rescaleHt} />
+              </div>
+            )}
+            {works.includes("restored") && (
+              <div>
+                <p className="text-xs text-tin">What the survey found (chooses the restoration norm; none ticked: sound):</p>
+                <div className="mt-1 grid gap-1 text-sm sm:grid-cols-2">
+                  {findings.map((f) => (
+                    <label key={f} className="inline-flex items-center gap-2">
+                      <input type="checkbox" className="accent-brass" value={f} {...register("condition")} />
+                      {findingLabels[f]}
+                    </label>
+                  ))}
+                </div>
+              </div>
+            )}
           </div>
         )}
-      </div>
+        {ownRank && (
+          <label className="mt-2 inline-flex items-center gap-2 text-sm">
+            <input type="checkbox" className="accent-brass" {...register("duplex")} />
+            Duplexed: its slider chest lets a second keyboard play it
+          </label>
+        )}
+      </fieldset>
+
+      {reed && (
+        <fieldset className="rounded border border-tin-rule p-3">
+          <legend className="px-1 text-xs font-semibold uppercase tracking-wide text-tin">Reed</legend>
+          <div className="grid gap-3 sm:grid-cols-3">
+            <div>
+              <label className="label" htmlFor="stop-res-length">Resonator</label>
+              <select id="stop-res-length" className="field" {...register("resonator.length")}>
+                {resonatorLengths.map((l) => <option key={l} value={l}>{resonatorLengthLabels[l]}</option>)}
+              </select>
+            </div>
+            <div>
+              <label className="label" htmlFor="stop-res-shape">Resonator shape</label>
+              <select id="stop-res-shape" className="field" {...register("resonator.shape")}>
+                <option value="conical">Conical</option>
+                <option value="cylindrical">Cylindrical</option>
+              </select>
+            </div>
+            <div>
+              <label className="label" htmlFor="stop-flues-from">Flue trebles from</label>
+              <input id="stop-flues-from" className="field num" placeholder="e.g. c'''" aria-invalid={!!err.fluesFrom} {...register("fluesFrom", { setValueAs: optionalText })} />
+              <Err e={err.fluesFrom} />
+            </div>
+          </div>
+        </fieldset>
+      )}
+
       <fieldset className="rounded border border-tin-rule p-3">
         <legend className="px-1 text-xs font-semibold uppercase tracking-wide text-tin">Scale</legend>
-        <div className="grid gap-3 sm:grid-cols-4">
+        <div className="grid gap-3 sm:grid-cols-5">
           <div>
-            <label className="label" htmlFor="stop-offset">Offset (semitones)</label>
-            <input id="stop-offset" type="number" step="1" className="field num" aria-invalid={!!err.scale?.offsetHt} {...register("scale.offsetHt", { valueAsNumber: true })} />
-            <Err e={err.scale?.offsetHt} />
+            <label className="label" htmlFor="stop-deviation">Deviation (semitones)</label>
+            <input id="stop-deviation" type="number" step="any" className="field num" aria-invalid={!!err.scale?.deviationHt} {...register("scale.deviationHt", { valueAsNumber: true })} />
+            <Err e={err.scale?.deviationHt} />
           </div>
           <div>
             <label className="label" htmlFor="stop-halving">Halves on note</label>
@@ -187,12 +287,21 @@ export function StopForm({
             <Err e={err.scale?.mouthWidth} />
           </div>
           <div>
+            <label className="label" htmlFor="stop-cutup">Cut-up</label>
+            <input id="stop-cutup" type="number" step="0.01" placeholder="usual" className="field num" aria-invalid={!!err.scale?.cutUp} {...register("scale.cutUp", { setValueAs: optionalNumber })} />
+            <Err e={err.scale?.cutUp} />
+          </div>
+          <div>
             <label className="label" htmlFor="stop-offsetbass">Basses offset</label>
             <input id="stop-offsetbass" type="number" min={0} max={32} className="field num" aria-invalid={!!err.offsetBassPipes} {...register("offsetBassPipes", { valueAsNumber: true })} />
             <Err e={err.offsetBassPipes} />
           </div>
         </div>
-        <p className="mt-1 text-xs text-tin">Offset in semitones from the normal scale (+ wider); mouth width as a fraction of the circumference (¼ normal); basses offset: the lowest pipes on an offset chest.</p>
+        <p className="mt-1 text-xs text-tin">
+          Deviation in semitones from the normal scale at the stop&apos;s own C (+ wider); mouth width as a fraction of the circumference (¼ normal; wooden
+          mouths span the pipe&apos;s width); cut-up as a fraction of the mouth width (blank: the firm&apos;s usual one for the family); basses offset: the
+          lowest pipes on an offset chest.
+        </p>
       </fieldset>
       <div className="flex flex-wrap gap-4 text-sm">
         <label className="inline-flex items-center gap-2">
@@ -203,7 +312,35 @@ export function StopForm({
           <input type="checkbox" className="accent-brass" checked={withBreaks} onChange={(e) => setWithBreaks(e.target.checked)} />
           Breaks (mixtures, cornets)
         </label>
+        <label className="inline-flex items-center gap-2">
+          <input type="checkbox" className="accent-brass" checked={withBass} onChange={(e) => setWithBass(e.target.checked)} />
+          Basses of another material
+        </label>
       </div>
+      {withBass && (
+        <div className="grid grid-cols-3 gap-3" data-testid="stop-bass">
+          <div>
+            <label className="label" htmlFor="stop-bass-notes">Lowest notes</label>
+            <input id="stop-bass-notes" type="number" min={1} max={61} className="field num" defaultValue={initial?.bass?.notes ?? 12} aria-invalid={!!err.bass?.notes} {...register("bass.notes", { valueAsNumber: true })} />
+            <Err e={err.bass?.notes} />
+          </div>
+          <div>
+            <label className="label" htmlFor="stop-bass-material">of</label>
+            <select id="stop-bass-material" className="field" defaultValue={initial?.bass?.material ?? "zinc"} {...register("bass.material")}>
+              {materials.map((m) => <option key={m} value={m}>{materialLabels[m]}</option>)}
+            </select>
+          </div>
+          {!reed && (
+            <div>
+              <label className="label" htmlFor="stop-bass-construction">built</label>
+              <select id="stop-bass-construction" className="field" defaultValue={initial?.bass?.construction ?? ""} {...register("bass.construction", { setValueAs: optionalText })}>
+                <option value="">as the stop</option>
+                {flueConstructions.map((c) => <option key={c} value={c}>{constructionLabels[c]}</option>)}
+              </select>
+            </div>
+          )}
+        </div>
+      )}
       {ownCompass && (
         <div className="grid grid-cols-2 gap-3">
           <div>
@@ -245,7 +382,7 @@ export function StopForm({
           <button type="button" className="btn mt-2 py-1 text-xs" onClick={() => breaks.append({ from: breaks.fields.length ? "c'" : "C", footages: [] })}>
             Add a break
           </button>
-          <p className="mt-1 text-xs text-tin">Footages comma-separated, one per rank, highest first: 2, 1 1/3, 1.</p>
+          <p className="mt-1 text-xs text-tin">Footages comma-separated, one per rank, highest first: 2, 1 1/3, 1. A dash ({SILENT}) for a rank that starts higher up (a progressive mixture, III–V).</p>
         </fieldset>
       )}
       <div className="flex items-center gap-2 border-t border-tin-rule pt-3">

@@ -1,6 +1,6 @@
 /** A scheme's stop list in the trade's usual layout: divisions with compass and details, stops numbered throughout. */
 import type { SchemeDocument } from "@/lib/spec/document";
-import { actionLabels, couplerName, chestTypeLabels, compassText, noteText, pitchText, workLabels, windText } from "./format";
+import { actionLabels, couplerName, chestTypeLabels, compassText, materialLabels, noteText, pitchText, resonatorLengthLabels, workLabels, windText } from "./format";
 import { Treatment } from "./treatment-mark";
 
 export function StopList({ doc }: { doc: SchemeDocument }) {
@@ -30,19 +30,23 @@ export function StopList({ doc }: { doc: SchemeDocument }) {
                   {d.stops.map((s) => {
                     const note: string[] = [];
                     if (s.compass) note.push(`from ${noteText(s.compass.low)}`);
-                    if (s.source && numberOf.has(s.source)) {
+                    if (s.source && numberOf.has(s.source) && (s.origin === "extension" || s.origin === "borrowed")) {
                       const srcDiv = divisionOfStop.get(s.source);
-                      note.push(s.treatment === "extension" ? `extension of no. ${numberOf.get(s.source)}` : `from ${srcDiv !== d.name ? `the ${srcDiv}, ` : ""}no. ${numberOf.get(s.source)}`);
+                      note.push(s.origin === "extension" ? `extension of no. ${numberOf.get(s.source)}` : `from ${srcDiv !== d.name ? `the ${srcDiv}, ` : ""}no. ${numberOf.get(s.source)}`);
                     }
+                    if (s.bass) note.push(`${s.bass.notes} basses of ${materialLabels[s.bass.material].toLowerCase()}`);
+                    if (s.construction === "reed" && s.resonator && s.resonator.length !== "full") note.push(`${resonatorLengthLabels[s.resonator.length].toLowerCase()} resonators`);
+                    if (s.fluesFrom) note.push(`flue trebles from ${noteText(s.fluesFrom)}`);
+                    if (s.duplex) note.push("duplexed");
                     return (
                       <tr key={s.id} className="align-baseline" data-testid={`list-stop-${s.name}`}>
                         <td className="num w-8 pr-2 text-right text-ink-soft">{numberOf.get(s.id)}.</td>
-                        <td className={`pr-2 ${s.treatment === "removed" ? "line-through" : ""}`}>
+                        <td className={`pr-2 ${s.origin === "removed" ? "line-through" : ""}`}>
                           {s.name}
                           {note.length > 0 && <span className="text-sm italic text-ink-soft"> ({note.join("; ")})</span>}
                         </td>
                         <td className="num w-16 whitespace-nowrap pr-3 text-right">{pitchText(s)}</td>
-                        <td className="w-32 whitespace-nowrap font-sans text-xs text-ink-soft"><Treatment treatment={s.treatment} /></td>
+                        <td className="w-40 font-sans text-xs text-ink-soft"><Treatment stop={s} /></td>
                       </tr>
                     );
                   })}
@@ -80,6 +84,15 @@ export function StopList({ doc }: { doc: SchemeDocument }) {
           {combination.generalPistons > 0 && ` ${combination.generalPistons} general pistons.`}
           {combination.divisionalPistons > 0 && ` ${combination.divisionalPistons} divisional pistons to each division.`}
           {combination.memoryLevels > 0 && ` Combination system with ${combination.memoryLevels} memory levels.`}
+        </p>
+      </section>
+      <section className="mt-4 break-inside-avoid text-sm" data-testid="list-case-wind">
+        <h2 className="text-lg font-semibold uppercase tracking-wider">Case and wind</h2>
+        <p>
+          {doc.case.work === "none" ? "No case work." : `Case ${workLabels[doc.case.work].toLowerCase()}.`}
+          {doc.case.dummyPipes > 0 && ` ${doc.case.dummyPipes} new display pipes in ${materialLabels[doc.case.frontMetal].toLowerCase()}.`}
+          {doc.case.gildingM2 > 0 && " Gilding renewed."}
+          {` Wind system ${workLabels[doc.wind.work].toLowerCase()}${doc.wind.blower === "new" ? ", with a new blower" : ""}.`}
         </p>
       </section>
     </div>

@@ -1,12 +1,15 @@
-/** Stopwright's own marks for what happens to a stop; always shown with the word (never the mark alone). */
-import type { Treatment } from "@/lib/estimate/scheme";
-import { treatmentLabels } from "./format";
+/**
+ * Stopwright's own marks for what happens to a stop — where its pipes come from and what is done to
+ * existing ones; always shown with the words (never the mark alone).
+ */
+import type { Origin, PipeWork } from "@/lib/estimate/scheme";
+import { dispositionMark, dispositionText, type DispositionMark } from "./format";
 
-export function TreatmentMark({ treatment, className = "" }: { treatment: Treatment; className?: string }) {
+export function TreatmentMark({ mark, className = "" }: { mark: DispositionMark; className?: string }) {
   const stroke = { fill: "none", stroke: "currentColor", strokeWidth: 1.6 } as const;
   const size = /(^|\s)h-/.test(className) ? "" : "h-3.5 w-3.5";
   let body;
-  switch (treatment) {
+  switch (mark) {
     case "new":
       body = <circle cx="8" cy="8" r="5.5" fill="currentColor" />;
       break;
@@ -34,6 +37,14 @@ export function TreatmentMark({ treatment, className = "" }: { treatment: Treatm
         <>
           <path d="M2.5 8h10" {...stroke} strokeLinecap="round" />
           <path d="M9 4.5 12.8 8 9 11.5" {...stroke} strokeLinecap="round" strokeLinejoin="round" />
+        </>
+      );
+      break;
+    case "rescaled":
+      body = (
+        <>
+          <circle cx="8" cy="8" r="5.2" {...stroke} />
+          <path d="M5 10.5 8 5.5l3 5" {...stroke} strokeLinecap="round" strokeLinejoin="round" />
         </>
       );
       break;
@@ -67,12 +78,13 @@ export function TreatmentMark({ treatment, className = "" }: { treatment: Treatm
   );
 }
 
-/** Mark and word together, e.g. "◐ Restored". */
-export function Treatment({ treatment, className = "" }: { treatment: Treatment; className?: string }) {
+/** Mark and words together, e.g. "◐ Existing: restored, revoiced". */
+export function Treatment({ stop, className = "" }: { stop: { origin: Origin; work?: readonly PipeWork[]; addedPipes?: "new" | "existing" }; className?: string }) {
+  const mark = dispositionMark(stop);
   return (
-    <span className={`inline-flex items-center gap-1 ${className}`} data-treatment={treatment}>
-      <TreatmentMark treatment={treatment} />
-      <span className={treatment === "removed" ? "line-through" : undefined}>{treatmentLabels[treatment]}</span>
+    <span className={`inline-flex items-center gap-1 ${className}`} data-treatment={mark}>
+      <TreatmentMark mark={mark} />
+      <span className={mark === "removed" ? "line-through" : undefined}>{dispositionText(stop)}</span>
     </span>
   );
 }

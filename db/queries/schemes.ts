@@ -2,7 +2,7 @@ import "server-only";
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { schemeRevisions, schemes, users, type Project, type Scheme } from "@/db/schema";
-import { insertScheme, loadDocument, writeDocument, type Store } from "@/db/scheme-store";
+import { insertScheme, loadDocument, worksOf, writeDocument, type Store } from "@/db/scheme-store";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
 import { schemeDocumentSchema, type SchemeDocument, type SchemeRead, type SchemeStatus } from "@/lib/spec/document";
@@ -124,7 +124,7 @@ export async function saveScheme({ user, schemeId, version, document, note = "" 
     await writeDocument(tx, schemeId, doc);
     const [updated] = await tx
       .update(schemes)
-      .set({ name: doc.name, description: doc.description, accessories: doc.accessories, version: scheme.version + 1, updatedById: user.id, updatedAt: new Date() })
+      .set({ name: doc.name, description: doc.description, accessories: doc.accessories, works: worksOf(doc), version: scheme.version + 1, updatedById: user.id, updatedAt: new Date() })
       .where(eq(schemes.id, schemeId))
       .returning();
     const read = await toRead(tx, updated!, project);

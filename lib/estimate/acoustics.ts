@@ -3,13 +3,15 @@
  * Open pipe f ≈ c / 2L, stopped f ≈ c / 4L (Handbook of Acoustics, p. 106), lengthened by end
  * corrections after H. Ising (1971), as summarised in secondary sources:
  *   ΔL_mouth = 0.73 · S / √S_M,  ΔL_top = 0.34 · √S  (S pipe cross-section, S_M mouth area, m²).
- * With S = πD²/4 and a rectangular mouth W × h (W = fraction·πD, h = cut-up · W) both are
- * proportional to the diameter, which keeps the per-pipe formula to one division and one multiply.
+ * For a round metal pipe (S = πD²/4, mouth W = fraction·πD wide and cut-up·W high) and for a square
+ * wooden pipe of the same cross-section (inside width a = D·√π/2, the mouth spanning the width a)
+ * both corrections are proportional to the diameter, which keeps the per-pipe formula to one
+ * division and one multiply.
  */
-import type { Construction } from "./scheme";
+import { SQUARE_SIDE_PER_DIAMETER } from "./scale";
 
-/** How a pipe resonates: open flues (incl. conical, capped), stopped flues (incl. half-stopped), reed resonators. */
-export type Resonator = "open" | "stopped" | "reed-full" | "reed-half";
+/** How a pipe resonates: open flues (incl. conical), stopped flues (stopped, capped, half-stopped), reed resonators. */
+export type Resonator = "open" | "stopped" | "reed";
 
 export const ISING_MOUTH = 0.73;
 export const ISING_TOP = 0.34;
@@ -19,42 +21,55 @@ export function speedOfSoundMPerS(temperatureC: number): number {
   return 331.3 * Math.sqrt(1 + temperatureC / 273.15);
 }
 
-/** The resonator model a construction uses. Half-stopped (chimney) pipes are modelled as stopped. */
-export function resonatorOf(construction: Construction): Resonator {
+/**
+ * The resonator model a construction uses. A closed top — a stopper, a soldered lid, a movable cap —
+ * makes a stopped pipe; a chimney through it (half-stopped) is modelled as stopped too.
+ */
+export function resonatorOf(construction: string): Resonator {
   switch (construction) {
     case "stopped":
+    case "capped":
     case "half-stopped":
       return "stopped";
-    case "reed-full":
-      return "reed-full";
-    case "reed-half":
-      return "reed-half";
+    case "reed":
+      return "reed";
     default:
       return "open";
   }
 }
 
-/** Mouth correction per unit diameter: ΔL_mouth / D = 0.73 / (4 · widthFraction · √cutUp). */
+/** Mouth correction per unit diameter of a round mouth: ΔL_mouth / D = 0.73 / (4 · widthFraction · √cutUp). */
 export function mouthCorrectionPerDiameter(mouthWidthFraction: number, cutUpFraction: number): number {
   return ISING_MOUTH / (4 * mouthWidthFraction * Math.sqrt(cutUpFraction));
 }
 
-/** Open-end correction per unit diameter: 0.34 · √(π/4) ≈ 0.301, i.e. ≈ 0.60 r (cf. Levine & Schwinger's 0.61 r). */
+/**
+ * Mouth correction per unit diameter of a square wooden pipe whose mouth spans the inside width a:
+ * S = a², S_M = a · cutUp·a, so ΔL_mouth = 0.73 · a / √cutUp, with a = D·√π/2.
+ */
+export function woodMouthCorrectionPerDiameter(cutUpFraction: number): number {
+  return (ISING_MOUTH * SQUARE_SIDE_PER_DIAMETER) / Math.sqrt(cutUpFraction);
+}
+
+/** Open-end correction per unit diameter: 0.34 · √(π/4) ≈ 0.301, i.e. ≈ 0.60 r (cf. Levine & Schwinger's 0.6133 r). Same for a square of equal area. */
 export const TOP_CORRECTION_PER_DIAMETER = ISING_TOP * Math.sqrt(Math.PI / 4);
 
 /**
  * End correction per unit diameter that a resonator's length loses: mouth + top for open pipes,
  * mouth only for stopped ones; none for reed resonators, which are cut to their nominal length.
  */
-export function endCorrectionPerDiameter(resonator: Resonator, mouthWidthFraction: number, cutUpFraction: number): number {
-  if (resonator === "open") return mouthCorrectionPerDiameter(mouthWidthFraction, cutUpFraction) + TOP_CORRECTION_PER_DIAMETER;
-  if (resonator === "stopped") return mouthCorrectionPerDiameter(mouthWidthFraction, cutUpFraction);
-  return 0;
+export function endCorrectionPerDiameter(resonator: Resonator, mouthWidthFraction: number, cutUpFraction: number, wood = false): number {
+  if (resonator === "reed") return 0;
+  const mouth = wood ? woodMouthCorrectionPerDiameter(cutUpFraction) : mouthCorrectionPerDiameter(mouthWidthFraction, cutUpFraction);
+  return resonator === "open" ? mouth + TOP_CORRECTION_PER_DIAMETER : mouth;
 }
 
-/** Wavelength divisor of each resonator: open and full-length reeds ½ wave, stopped and half-length reeds ¼ wave. */
-export function waveDivisor(resonator: Resonator): 2 | 4 {
-  return resonator === "open" || resonator === "reed-full" ? 2 : 4;
+/**
+ * Wavelength divisor of a resonator: open flues ½ wave (2), stopped ¼ wave (4); a reed resonator is
+ * the given fraction of full (half-wave) length: full 2, half 4, an eighth 16.
+ */
+export function waveDivisor(resonator: Resonator, resonatorFraction = 1): number {
+  return resonator === "open" ? 2 : resonator === "stopped" ? 4 : 2 / resonatorFraction;
 }
 
 /** A pipe can be no shorter than this fraction of its uncorrected length (guards absurdly wide scales). */

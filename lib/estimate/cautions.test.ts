@@ -1,27 +1,27 @@
 import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
-import { CAUTION_TEXT, cautionsFor } from "./cautions";
 import { estimateScheme } from "./estimate";
 import { manual, scheme, stop } from "./test-support/schemes";
 
+const codes = (...args: Parameters<typeof scheme>) => estimateScheme(scheme(...args), DEFAULT_RATES).cautions.map((c) => c.code);
+
 describe("cautions", () => {
-  it("defers to local regulations and licensed practice in every text", () => {
-    expect(CAUTION_TEXT.lead).toMatch(/regulations/);
-    expect(CAUTION_TEXT.mains).toMatch(/licensed electrician/);
-    expect(CAUTION_TEXT.site).toMatch(/regulations/);
+  it("warns of lead for tin–lead pipe metal, and for any existing metal pipes whatever is recorded", () => {
+    expect(codes([manual("gt", [stop("p", 8, { material: "spotted" })])])).toContain("lead");
+    expect(codes([manual("gt", [stop("p", 8, { material: "zinc" }), stop("f", 4, { material: "oak" })])], { wind: { blower: "retained" } })).toEqual(["site"]);
+    expect(codes([manual("gt", [stop("p", 8, { material: "zinc", origin: "existing", work: ["restored"] })])])).toContain("lead");
+    expect(codes([manual("gt", [stop("p", 8, { material: "zinc" })])], { case: { work: "new", dummyPipes: 5, frontMetal: "high-tin" } })).toContain("lead");
   });
 
-  it("carries each caution only where it applies", () => {
-    expect(cautionsFor({ leadBearing: false, electric: false, siteWork: true }).map((c) => c.code)).toEqual(["site"]);
-    expect(cautionsFor({ leadBearing: true, electric: true, siteWork: true }).map((c) => c.code)).toEqual(["lead", "mains", "site"]);
+  it("warns of mains for electric action or a new blower", () => {
+    expect(codes([manual("gt", [stop("p", 8, { material: "zinc" })], { action: "electric" })], { wind: { blower: "retained" } })).toContain("mains");
+    expect(codes([manual("gt", [stop("p", 8, { material: "zinc" })])])).toContain("mains"); // a new blower
+    expect(codes([manual("gt", [stop("p", 8, { material: "zinc" })])], { wind: { blower: "retained" } })).not.toContain("mains");
   });
 
-  it("warns of lead for tin–lead pipe metal and of mains for electric action", () => {
-    const leaded = estimateScheme(scheme([manual("gt", [stop("p", 8, { material: "spotted" })], { action: "electric" })]), DEFAULT_RATES);
-    expect(leaded.cautions.map((c) => c.code)).toEqual(["lead", "mains", "site"]);
-    const unleaded = estimateScheme(scheme([manual("gt", [stop("p", 8, { material: "zinc" }), stop("f", 4, { material: "oak" })])]), DEFAULT_RATES);
-    expect(unleaded.cautions.map((c) => c.code)).toEqual(["site"]);
-    const oldPipes = estimateScheme(scheme([manual("gt", [stop("p", 8, { material: "zinc", treatment: "restored" })])]), DEFAULT_RATES);
-    expect(oldPipes.cautions.map((c) => c.code)).toContain("lead"); // existing pipe metal may hold lead whatever is recorded
+  it("defers in every caution it carries to local rules and licensed or competent people", () => {
+    const e = estimateScheme(scheme([manual("gt", [stop("p", 8)], { action: "electric" })]), DEFAULT_RATES);
+    expect(e.cautions.map((c) => c.code)).toEqual(["lead", "mains", "site"]);
+    for (const c of e.cautions) expect(c.text, c.code).toMatch(/regulations|licensed|local .*code/);
   });
 });

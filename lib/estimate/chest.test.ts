@@ -1,10 +1,10 @@
 import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
-import { chestFit, chestSize, clearanceMm, pipeRowWidthMm, type ChestRow } from "./chest";
+import { chestFit, chestSideOf, chestSize, clearanceMm, pipeRowWidthMm, placeRow, rowOf, type ChestRow } from "./chest";
 import { estimateScheme } from "./estimate";
 import { manual, scheme, stop } from "./test-support/schemes";
 
-const N = { clearanceMinMm: 10, clearanceFractionOfDiameter: 0.2, endBoardMm: 50, passageBoardMm: 300 };
+const N = { clearanceMinMm: 10, clearanceFractionOfDiameter: 0.2, endBoardMm: 50, passageBoardMm: 300, heightMm: 700, kgPerM2: 140 };
 const row = (c: number, cs: number, d: number): ChestRow => ({ cSideMm: c, cSharpSideMm: cs, largestFootprintMm: d, largestDiameterMm: d });
 
 describe("chest space", () => {
@@ -70,5 +70,22 @@ describe("chest space of a division", () => {
     const two = estimateOf(0);
     expect(two.main.depthMm).toBeGreaterThan(one.main.depthMm);
     expect(one.fit!.depthMarginMm).toBeGreaterThan(two.fit!.depthMarginMm);
+  });
+});
+
+describe("one chest rule for the figures and the drawing", () => {
+  it("places a row's pipes from the end boards inward, the C side from the left and the C♯ side from the right", () => {
+    const pipes = [0, 1, 2, 3].map((k) => ({ footprintMm: 100 - k * 10, diameterMm: 100 - k * 10, channel: 36 + k }));
+    const row = rowOf(pipes, "c-c-sharp", N);
+    const size = chestSize([row], "c-c-sharp", false, N);
+    const xs = placeRow(pipes, size, N);
+    // C (width 100 + 10 + 20 = 130) and D (80 + 10 + 16 = 106) on the left; C♯ (90 + 10 + 18 = 118) and D♯ (70 + 10 + 14 = 94) from the right end.
+    expect(xs[0]).toBeCloseTo(50 + 65, 9);
+    expect(xs[2]).toBeCloseTo(50 + 130 + 53, 9);
+    expect(xs[1]).toBeCloseTo(size.lengthMm - 50 - 59, 9);
+    expect(xs[3]).toBeCloseTo(size.lengthMm - 50 - 118 - 47, 9);
+    expect(row.cSideMm).toBeCloseTo(236, 9);
+    expect(row.cSharpSideMm).toBeCloseTo(212, 9);
+    expect(chestSideOf(37, "chromatic")).toBe(0);
   });
 });

@@ -1,10 +1,12 @@
 /**
- * Windchest space. Pipes of a rank stand in a row; each takes its width plus a clearance that grows
- * with the pipe (a minimum plus a fraction of the diameter). A chromatic chest has one row per rank;
- * a C/C♯ chest splits each rank into a C side and a C♯ side, two half-chests side by side. The chest
- * is as long as its longest row plus end boards. Depth is Σ over rows of (largest pipe + clearance),
- * plus a passage board for tuning where the division has one. Offset bass chests are sized the same
- * way and are assumed to stand elsewhere in the case (not counted against the space).
+ * Windchest space — the one chest rule, used by the estimator's figures and by the chest drawing.
+ * Pipes of a rank stand in a row; each takes its footprint (diameter, or a wooden pipe's outside
+ * width) plus a clearance that grows with the pipe (a minimum plus a fraction of the diameter). A
+ * chromatic chest has one row per rank; a C/C♯ chest splits each rank by the parity of its channel
+ * into a C side and a C♯ side, two half-chests, basses at their outer ends. The chest is as long as
+ * its longest row (or half-rows) plus end boards. Depth is Σ over rows of (largest pipe + its
+ * clearance), plus a passage board for tuning where the division has one. Offset bass chests are
+ * sized the same way (chromatic, no passage board) and stand elsewhere in the case.
  */
 import type { Rates } from "./rates";
 
@@ -16,9 +18,19 @@ export function clearanceMm(diameterMm: number, n: ChestNorms): number {
   return n.clearanceMinMm + n.clearanceFractionOfDiameter * diameterMm;
 }
 
-/** Row length in mm one pipe takes: its footprint (diameter, or outside width of a wooden pipe) plus clearance. */
+/** Row length in mm one pipe takes: its footprint plus clearance. */
 export function pipeRowWidthMm(footprintMm: number, diameterMm: number, n: ChestNorms): number {
-  return footprintMm + clearanceMm(diameterMm, n);
+  return footprintMm + n.clearanceMinMm + n.clearanceFractionOfDiameter * diameterMm;
+}
+
+/** Depth in mm of a row: its largest pipe plus that pipe's clearance. */
+export function rowDepthMm(largestFootprintMm: number, largestDiameterMm: number, n: ChestNorms): number {
+  return largestFootprintMm + clearanceMm(largestDiameterMm, n);
+}
+
+/** Which half-chest a channel stands on: 0 the C side (C, D, E, F♯, G♯, A♯), 1 the C♯ side; always 0 on a chromatic chest. */
+export function chestSideOf(channel: number, layout: ChestLayout): 0 | 1 {
+  return layout === "chromatic" ? 0 : ((channel & 1) as 0 | 1);
 }
 
 /** One rank's row on a chest: summed widths on the C side and the C♯ side, and its largest pipe. */
@@ -52,13 +64,56 @@ export function chestSize(rows: readonly ChestRow[], layout: ChestLayout, passag
     if (r.cSideMm > longestC) longestC = r.cSideMm;
     if (r.cSharpSideMm > longestCs) longestCs = r.cSharpSideMm;
     if (r.cSideMm + r.cSharpSideMm > longestWhole) longestWhole = r.cSideMm + r.cSharpSideMm;
-    depth += r.largestFootprintMm + clearanceMm(r.largestDiameterMm, n);
+    depth += rowDepthMm(r.largestFootprintMm, r.largestDiameterMm, n);
   }
   if (passageBoard) depth += n.passageBoardMm;
   const ends = 2 * n.endBoardMm;
   if (layout === "chromatic") return { layout, rows: rows.length, lengthMm: r1(longestWhole + ends), depthMm: r1(depth) };
   const halves = [r1(longestC + ends), r1(longestCs + ends)] as const;
   return { layout, rows: rows.length, lengthMm: r1(halves[0] + halves[1]), depthMm: r1(depth), halvesMm: halves };
+}
+
+export interface RowPipe {
+  readonly footprintMm: number;
+  readonly diameterMm: number;
+  readonly channel: number;
+}
+
+/**
+ * Where the pipes of one row stand along a chest of `size` (x of each pipe's centre, mm from the
+ * left end), lowest key first: chromatic left to right after the end board; on a C/C♯ chest the
+ * C side rises from the left end toward the middle, the C♯ side from the right end.
+ */
+export function placeRow(pipes: readonly RowPipe[], size: ChestSize, n: ChestNorms): number[] {
+  const xs: number[] = [];
+  let left = n.endBoardMm;
+  let right = size.lengthMm - n.endBoardMm;
+  for (const p of pipes) {
+    const w = pipeRowWidthMm(p.footprintMm, p.diameterMm, n);
+    if (chestSideOf(p.channel, size.layout) === 0) {
+      xs.push(left + w / 2);
+      left += w;
+    } else {
+      xs.push(right - w / 2);
+      right -= w;
+    }
+  }
+  return xs;
+}
+
+/** The chest row of a list of pipes, by the same rule the estimator sums. */
+export function rowOf(pipes: readonly RowPipe[], layout: ChestLayout, n: ChestNorms): ChestRow {
+  let c = 0;
+  let cs = 0;
+  let foot = 0;
+  let dia = 0;
+  for (const p of pipes) {
+    const w = pipeRowWidthMm(p.footprintMm, p.diameterMm, n);
+    if (chestSideOf(p.channel, layout) === 0) c += w;
+    else cs += w;
+    if (p.footprintMm > foot) [foot, dia] = [p.footprintMm, p.diameterMm];
+  }
+  return { cSideMm: c, cSharpSideMm: cs, largestFootprintMm: foot, largestDiameterMm: dia };
 }
 
 export interface ChestFit {

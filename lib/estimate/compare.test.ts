@@ -7,19 +7,19 @@ import { manual, pedal, scheme, stop } from "./test-support/schemes";
 
 const a = scheme([
   manual("gt", [stop("p8", 8), stop("o4", 4), stop("m", "1 1/3", { family: "mixture", ranks: 3, breaks: [{ from: "C", footages: ["1 1/3", "1", "2/3"] }] })]),
-  pedal("pd", [stop("b16", 16, { family: "flute", construction: "stopped" })]),
+  pedal("pd", [stop("b16", 16, { family: "flute", construction: "stopped" })], { chest: "pitman", action: "electro-pneumatic" }),
 ], { name: "Scheme A (invented)" });
 const b = scheme([
-  manual("gt", [stop("p8", 8, { treatment: "restored" }), stop("f4", 4, { family: "flute" }), stop("m", "1 1/3", { family: "mixture", ranks: 3, breaks: [{ from: "C", footages: ["1 1/3", "1", "2/3"] }] })]),
-  pedal("pd", [stop("b16", 16, { family: "flute", construction: "stopped" }), stop("b8", 8, { family: "flute", treatment: "extension", source: "b16" })]),
-], { name: "Scheme B (invented)" });
+  manual("gt", [stop("p8", 8, { origin: "existing", work: ["restored"] }), stop("f4", 4, { family: "flute" }), stop("m", "1 1/3", { family: "mixture", ranks: 3, breaks: [{ from: "C", footages: ["1 1/3", "1", "2/3"] }] })]),
+  pedal("pd", [stop("b16", 16, { family: "flute", construction: "stopped" }), stop("b8", 8, { family: "flute", origin: "extension", source: "b16" })], { chest: "pitman", action: "electro-pneumatic" }),
+], { name: "Scheme B (invented)", case: { work: "restored" } });
 
 describe("comparing schemes", () => {
   it("lists stops added, removed and changed, with the fields that changed", () => {
     const c = compareStops(a, b);
     expect(c.added.map((s) => s.stopId).sort()).toEqual(["b8", "f4"]);
     expect(c.removed.map((s) => s.stopId)).toEqual(["o4"]);
-    expect(c.changed).toEqual([{ divisionId: "gt", divisionName: "gt", stopId: "p8", stopName: "p8", changes: [{ field: "treatment", from: "new", to: "restored" }] }]);
+    expect(c.changed).toEqual([{ divisionId: "gt", divisionName: "gt", stopId: "p8", stopName: "p8", changes: [{ field: "origin", from: "new", to: "existing" }, { field: "work", from: "[]", to: '["restored"]' }] }]);
   });
 
   it("treats the same footage written two ways as unchanged", () => {
@@ -39,6 +39,11 @@ describe("comparing schemes", () => {
     expect(c.money.total.diffAmount).toBe(new Decimal(eb.money.totalAmount).minus(ea.money.totalAmount).toFixed(2));
     expect(c.totals.weeks).toBeCloseTo(eb.programme.totalWeeks - ea.programme.totalWeeks, 6);
     expect(c.divisions.find((d) => d.id === "pd")!.pipesDiff).toBe(12);
+    // The case is restored in B only: its part of the work appears in the comparison with its cost.
+    const casePart = c.packages.find((p) => p.package === "case")!;
+    expect(new Decimal(casePart.directCost.fromAmount).isZero()).toBe(true);
+    expect(casePart.directCost.diffAmount).toBe(casePart.directCost.toAmount);
+    expect(c.money.items.diffAmount).toBe(new Decimal(eb.money.itemsAmount).minus(ea.money.itemsAmount).toFixed(2));
   });
 
   it("finds nothing between a scheme and itself", () => {

@@ -1,12 +1,13 @@
 /**
  * Comparing two schemes, as an organ committee does: which stops are added, removed or changed
  * (matched by stop id), and the difference (second minus first) in every total — pipes, hours,
- * metal, wood, wiring, chest space, money (exact decimals) and weeks.
+ * metal, wood, wiring, chest space, money by line and by part of the work (exact decimals) and weeks.
  */
 import type { Scheme, Stop } from "./scheme";
 import type { Rates } from "./rates";
 import { estimateScheme, type Estimate } from "./estimate";
-import { departments, type Department } from "./labour";
+import { departments, type Department } from "./departments";
+import { packageLabels, packages, type PackageId } from "./cost-centres";
 import { metals, woods, type Metal, type Wood } from "./materials";
 import { diffAmount } from "./money";
 import { parseFootage } from "./pitch";
@@ -46,6 +47,7 @@ export interface Comparison {
   readonly money: {
     readonly labour: AmountDiff;
     readonly materials: AmountDiff;
+    readonly items: AmountDiff;
     readonly subtotal: AmountDiff;
     readonly overhead: AmountDiff;
     readonly contingency: AmountDiff;
@@ -54,6 +56,8 @@ export interface Comparison {
     readonly tax: AmountDiff;
     readonly total: AmountDiff;
   };
+  /** Direct cost of each part of the work (case, wind, console …) in either scheme. */
+  readonly packages: readonly { readonly package: PackageId; readonly label: string; readonly hoursDiff: number; readonly directCost: AmountDiff }[];
   readonly programme: readonly { readonly id: string; readonly label: string; readonly weeksDiff: number }[];
   /** Per division present in either scheme (matched by id). */
   readonly divisions: readonly {
@@ -78,7 +82,8 @@ function show(v: unknown): string {
 }
 
 const COMPARED: readonly (keyof Stop)[] = [
-  "name", "footage", "ranks", "breaks", "family", "construction", "material", "scale", "compass", "treatment", "source", "offsetBassPipes",
+  "name", "footage", "ranks", "breaks", "family", "construction", "material", "scale", "resonator", "fluesFrom", "bass", "compass",
+  "origin", "source", "addedPipes", "work", "rescaleHt", "condition", "duplex", "offsetBassPipes",
 ];
 
 function sameFootage(a: Stop["footage"], b: Stop["footage"]): boolean {
@@ -147,6 +152,7 @@ export function compareEstimates(ea: Estimate, eb: Estimate): Omit<Comparison, "
     money: {
       labour: amounts(ma.labourAmount, mb.labourAmount),
       materials: amounts(ma.materialsAmount, mb.materialsAmount),
+      items: amounts(ma.itemsAmount, mb.itemsAmount),
       subtotal: amounts(ma.subtotalAmount, mb.subtotalAmount),
       overhead: amounts(ma.overhead.amount, mb.overhead.amount),
       contingency: amounts(ma.contingency.amount, mb.contingency.amount),
@@ -155,6 +161,13 @@ export function compareEstimates(ea: Estimate, eb: Estimate): Omit<Comparison, "
       tax: amounts(ma.tax.amount, mb.tax.amount),
       total: amounts(ma.totalAmount, mb.totalAmount),
     },
+    packages: packages
+      .filter((p) => ea.packages.some((x) => x.package === p) || eb.packages.some((x) => x.package === p))
+      .map((p) => {
+        const cost = (e: Estimate) => e.money.byPackage.find((x) => x.package === p)?.directCostAmount ?? "0.00";
+        const hours = (e: Estimate) => e.packages.find((x) => x.package === p)?.hoursTotal ?? 0;
+        return { package: p, label: packageLabels[p], hoursDiff: d1(hours(ea), hours(eb)), directCost: amounts(cost(ea), cost(eb)) };
+      }),
     programme: eb.programme.phases.map((p, i) => ({ id: p.id, label: p.label, weeksDiff: d1(ea.programme.phases[i].weeks, p.weeks) })),
     divisions: ids.map((id) => {
       const x = ea.divisions.find((d) => d.id === id);

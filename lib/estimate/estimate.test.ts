@@ -4,12 +4,15 @@ import fc from "fast-check";
 import Decimal from "decimal.js";
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
-import { estimateScheme, SchemeError } from "./estimate";
+import { estimateScheme, SchemeError, type Estimate } from "./estimate";
 import { parseSchemeFile } from "./validate";
-import { departments } from "./labour";
+import { departments } from "./departments";
 import { metals } from "./materials";
 import { pureMinusTemperedCents } from "./pitch";
-import { arbScheme, manual, pedal, scheme, stop } from "./test-support/schemes";
+import { arbScheme, checkOrgan40, manual, pedal, scheme, stop } from "./test-support/schemes";
+import { schemeDocumentSchema } from "../spec/document";
+import { estimateDocument } from "../spec/estimate";
+import { enlargeScheme } from "../../db/demo-scenario";
 import type { Scheme } from "./scheme";
 
 function example(file: string) {
@@ -20,6 +23,10 @@ function example(file: string) {
 
 const sum = (xs: readonly string[]) => xs.reduce((s, x) => s.plus(x), new Decimal(0)).toFixed(2);
 const tenths = (xs: readonly number[]) => xs.reduce((s, x) => s + Math.round(x * 10), 0) / 10;
+const share = (e: Estimate, ...packages: string[]) =>
+  e.packages.filter((p) => packages.includes(p.package)).reduce((s, p) => s + p.hoursTotal, 0) / e.totals.hoursTotal;
+const pipesAndVoicing = (e: Estimate) =>
+  (e.totals.hours.metalPipes + e.totals.hours.woodPipes + e.totals.hours.reeds + e.totals.hours.voicing + e.totals.hours.tonalFinishing) / e.totals.hoursTotal;
 
 function deepFreeze<T>(o: T): T {
   if (o && typeof o === "object") {
@@ -51,6 +58,15 @@ describe("the examples", () => {
     expect(e.divisions.some((d) => d.chest.fit?.fits === true)).toBe(true);
     expect(e.divisions.some((d) => d.chest.fit?.fits === false)).toBe(true);
   });
+
+  it("gives both examples their case, wind, console, site and design lines", () => {
+    for (const file of ["small-two-manual.json", "large-five-manual.json"]) {
+      const { scheme: s, rates } = example(file);
+      const e = estimateScheme(s, rates);
+      const priced = e.money.byPackage.filter((p) => new Decimal(p.directCostAmount).greaterThan(0)).map((p) => p.package);
+      expect(priced, file).toEqual(expect.arrayContaining(["pipes", "chests", "wind", "case", "console", "site", "design"]));
+    }
+  });
 });
 
 describe("totals", () => {
@@ -60,27 +76,131 @@ describe("totals", () => {
   it("adds the divisions' pipes, hours and metal up to the scheme totals", () => {
     expect(e.divisions.reduce((n, d) => n + d.pipes.total, 0)).toBe(e.totals.pipes.total);
     for (const dep of departments) expect(tenths([...e.divisions.map((d) => d.hours[dep]), e.schemeWide.hours[dep]])).toBe(e.totals.hours[dep]);
+    for (const dep of departments) expect(tenths(e.packages.map((p) => p.hours[dep]))).toBe(e.totals.hours[dep]);
     for (const m of metals) expect(tenths(e.divisions.map((d) => d.metalKg[m]))).toBe(e.totals.metalKg[m]);
     expect(e.divisions.reduce((n, d) => n + d.wiring.conductorLengthM, e.schemeWide.wiring.conductorLengthM)).toBe(e.totals.wiring.conductorLengthM);
   });
 
-  it("shows money lines that sum exactly to the shown totals, and division costs that sum to the subtotal", () => {
+  it("shows money lines that sum exactly to the shown totals, and division and package costs that sum to the subtotal", () => {
     const m = e.money;
-    expect(sum([...m.labour.map((l) => l.amount), ...m.materials.map((l) => l.amount)])).toBe(m.subtotalAmount);
+    expect(sum([...m.labour.map((l) => l.amount), ...m.materials.map((l) => l.amount), ...m.items.map((l) => l.amount)])).toBe(m.subtotalAmount);
+    expect(sum([m.labourAmount, m.materialsAmount, m.itemsAmount])).toBe(m.subtotalAmount);
     expect(sum([m.subtotalAmount, m.overhead.amount, m.contingency.amount, m.margin.amount])).toBe(m.netAmount);
     expect(sum([m.netAmount, m.tax.amount])).toBe(m.totalAmount);
     expect(sum([...e.divisions.map((d) => d.directCostAmount), e.schemeWide.directCostAmount])).toBe(m.subtotalAmount);
+    expect(sum(m.byPackage.map((p) => p.directCostAmount))).toBe(m.subtotalAmount);
   });
 
-  it("prices every labour line at its hours × rate to within a cent per cost centre", () => {
-    for (const l of e.money.labour) {
-      const exact = new Decimal(l.hours).times(l.rateAmount);
-      expect(exact.minus(l.amount).abs().toNumber()).toBeLessThanOrEqual(0.005 * (e.divisions.length + 1));
-    }
+  it("prices every labour line at its hours × rate, and every item at its quantity × price, to within a cent per cost centre", () => {
+    const centres = e.money.byCentre.length;
+    for (const l of e.money.labour) expect(new Decimal(l.hours).times(l.rateAmount).minus(l.amount).abs().toNumber()).toBeLessThanOrEqual(0.005 * centres);
+    for (const l of e.money.items) expect(new Decimal(l.quantity).times(l.priceAmount).minus(l.amount).abs().toNumber()).toBeLessThanOrEqual(0.005 * centres);
   });
 
   it("carries the lead, mains and site cautions", () => {
     expect(e.cautions.map((c) => c.code)).toEqual(["lead", "mains", "site"]);
+  });
+});
+
+describe("existing pipes are not bought again", () => {
+  const one = (origin: "new" | "existing", work: ("restored" | "revoiced")[] = []) =>
+    estimateScheme(scheme([manual("gt", [stop("p", 8, { origin, work })])]), DEFAULT_RATES);
+
+  it("buys the metal of new pipes only, with the casting and offcut allowance", () => {
+    const fresh = one("new");
+    const kept = one("existing");
+    // Both organs carry the same finished metal (it loads the chests and the gallery) …
+    expect(kept.totals.metalTotalKg).toBe(fresh.totals.metalTotalKg);
+    expect(kept.totals.metalTotalKg).toBeGreaterThan(0);
+    // … but only the new pipes' metal is bought: 15–30 % over the finished weight for casting, planing and offcuts (from memory).
+    expect(kept.totals.metalBoughtTotalKg).toBe(0);
+    const allowance = fresh.totals.metalBoughtTotalKg / fresh.totals.metalTotalKg - 1;
+    expect(allowance).toBeGreaterThanOrEqual(0.15);
+    expect(allowance).toBeLessThanOrEqual(0.3);
+    expect(kept.money.materials.find((m) => m.material === "spotted")).toBeUndefined();
+  });
+
+  it("buys only repair metal for restored pipes", () => {
+    const restored = one("existing", ["restored"]);
+    const fresh = one("new");
+    expect(restored.totals.metalBoughtTotalKg).toBeGreaterThan(0);
+    expect(restored.totals.metalBoughtTotalKg).toBeLessThan(fresh.totals.metalBoughtTotalKg * 0.1);
+  });
+
+  it("counts existing timber in the weights, not in the money", () => {
+    const wood = (origin: "new" | "existing") =>
+      estimateScheme(scheme([pedal("pd", [stop("b", 16, { family: "flute", construction: "stopped", material: "pine", origin })])]), DEFAULT_RATES);
+    expect(wood("existing").totals.woodM3.pine).toBe(wood("new").totals.woodM3.pine);
+    expect(wood("existing").totals.woodBoughtM3.pine).toBe(0);
+    expect(wood("new").totals.woodBoughtM3.pine).toBeGreaterThan(wood("new").totals.woodM3.pine);
+    expect(wood("existing").site.weights.pipesKg).toBe(wood("new").site.weights.pipesKg);
+  });
+});
+
+describe("calibration against the trade (common practice, from memory — docs/estimating-method.md, Calibration)", () => {
+  const e = estimateScheme(checkOrgan40(), DEFAULT_RATES);
+
+  it("puts a new three-manual mechanical organ of 40 stops at 15,000–30,000 hours, about 400–750 per stop", () => {
+    expect(e.totals.stops).toBe(40);
+    expect(e.totals.hoursTotal).toBeGreaterThanOrEqual(15000);
+    expect(e.totals.hoursTotal).toBeLessThanOrEqual(30000);
+    expect(e.totals.hoursPerStop).toBeGreaterThanOrEqual(400);
+    expect(e.totals.hoursPerStop).toBeLessThanOrEqual(750);
+  });
+
+  it("gives pipes and voicing 30–40 % of the hours, the case 15–25 %, chests and action 20–25 %", () => {
+    expect(pipesAndVoicing(e)).toBeGreaterThanOrEqual(0.3);
+    expect(pipesAndVoicing(e)).toBeLessThanOrEqual(0.4);
+    expect(share(e, "case")).toBeGreaterThanOrEqual(0.15);
+    expect(share(e, "case")).toBeLessThanOrEqual(0.25);
+    expect(share(e, "chests")).toBeGreaterThanOrEqual(0.2);
+    expect(share(e, "chests")).toBeLessThanOrEqual(0.25);
+  });
+
+  it("prices it in the low millions", () => {
+    const total = new Decimal(e.money.totalAmount);
+    expect(total.greaterThanOrEqualTo(1_000_000)).toBe(true);
+    expect(total.lessThan(5_000_000)).toBe(true);
+  });
+
+  it("prices a large rebuild of about 100 stops in the millions, not hundreds of thousands", () => {
+    // The 40-stop check organ two and a half times over, two thirds of its pipes kept and restored.
+    const base = checkOrgan40();
+    const copies = ["", " B", " C"].map((suffix, k) =>
+      base.divisions.map((d) => ({
+        ...d, id: d.id + suffix, name: d.name + suffix, chestWork: "restored" as const,
+        stops: d.stops.slice(0, k === 2 ? Math.ceil(d.stops.length / 2) : d.stops.length).map((s, i) => ({
+          ...s, id: s.id + suffix, ...(i % 3 === 0 ? {} : { origin: "existing" as const, work: ["restored" as const] }),
+        })),
+      })),
+    );
+    const rebuild: Scheme = { ...base, name: "A large rebuild (invented)", divisions: copies.flat(), accessories: { ...base.accessories, couplers: [], tremulants: [] }, case: { ...base.case, work: "restored" } };
+    const r = estimateScheme(rebuild, DEFAULT_RATES);
+    expect(r.totals.stops).toBeGreaterThanOrEqual(95);
+    expect(r.totals.stops).toBeLessThanOrEqual(105);
+    expect(new Decimal(r.money.totalAmount).greaterThanOrEqualTo(1_000_000)).toBe(true);
+  });
+
+  it("puts the large example, a new concert organ partly reusing an earlier one, at 400–750 hours a stop and in the millions", () => {
+    // The share bands are for mechanical action; with electric action the chests take less and the pipes a larger share.
+    const { scheme: s, rates } = example("large-five-manual.json");
+    const large = estimateScheme(s, rates);
+    expect(large.totals.hoursPerStop).toBeGreaterThanOrEqual(400);
+    expect(large.totals.hoursPerStop).toBeLessThanOrEqual(750);
+    expect(new Decimal(large.money.totalAmount).greaterThanOrEqualTo(1_000_000)).toBe(true);
+  });
+
+  it("puts the demo's parish rebuild (scheme B) between a restoration and a new organ of its size", () => {
+    // Derived band: its new stops at 400–750 h each, its restored ones at 30–60 % of that (from memory).
+    const r = estimateDocument(schemeDocumentSchema.parse(enlargeScheme), { pitchHz: 440, temperatureC: 15 }, DEFAULT_RATES);
+    if (!r.ok) throw new Error(r.messages.join("; "));
+    const b = r.estimate;
+    const newStops = b.divisions.flatMap((d) => d.stops).filter((s) => s.origin === "new" || s.origin === "extension").length;
+    const kept = b.totals.stops - newStops;
+    expect(b.totals.hoursTotal).toBeGreaterThanOrEqual(newStops * 400 + kept * 400 * 0.3);
+    expect(b.totals.hoursTotal).toBeLessThanOrEqual(newStops * 750 + kept * 750 * 0.6);
+    expect(pipesAndVoicing(b)).toBeGreaterThanOrEqual(0.3);
+    expect(pipesAndVoicing(b)).toBeLessThanOrEqual(0.45);
   });
 });
 
@@ -104,10 +224,11 @@ describe("behaviour", () => {
   });
 
   it("charges no pipe making for borrowed and prepared stops but does wire them", () => {
-    const base = scheme([manual("gt", [stop("p", 8)], { action: "electric" }), pedal("pd", [], { action: "electric" })]);
+    const unit = { action: "electric", chest: "direct-electric" } as const;
+    const base = scheme([manual("gt", [stop("p", 8)], unit), pedal("pd", [], { action: "electric" })]);
     const more = scheme([
-      manual("gt", [stop("p", 8)], { action: "electric" }),
-      pedal("pd", [stop("b", 8, { treatment: "borrowed", source: "p" }), stop("x", 4, { treatment: "prepared" })], { action: "electric" }),
+      manual("gt", [stop("p", 8)], unit),
+      pedal("pd", [stop("b", 8, { origin: "borrowed", source: "p" }), stop("x", 4, { origin: "prepared" })], { action: "electric" }),
     ]);
     const [a, b] = [estimateScheme(base, DEFAULT_RATES), estimateScheme(more, DEFAULT_RATES)];
     expect(b.totals.hours.metalPipes).toBe(a.totals.hours.metalPipes);
@@ -117,14 +238,15 @@ describe("behaviour", () => {
   });
 
   it("costs more to make pipes new than to restore them", () => {
-    const cost = (treatment: "new" | "restored") => estimateScheme(scheme([manual("gt", [stop("p", 8, { treatment }), stop("o", 4, { treatment })])]), DEFAULT_RATES).money.totalAmount;
-    expect(new Decimal(cost("new")).greaterThan(cost("restored"))).toBe(true);
+    const cost = (origin: "new" | "existing") =>
+      estimateScheme(scheme([manual("gt", [stop("p", 8, { origin, work: origin === "existing" ? ["restored"] : [] }), stop("o", 4, { origin })])]), DEFAULT_RATES).money.totalAmount;
+    expect(new Decimal(cost("new")).greaterThan(cost("existing"))).toBe(true);
   });
 
   it("puts extension pipes on their rank's chest", () => {
     const s = scheme([
       manual("gt", [stop("d16", 16)], { chest: "direct-electric", action: "electric" }),
-      pedal("pd", [stop("d8", 8, { treatment: "extension", source: "d16" })], { action: "electric" }),
+      pedal("pd", [stop("d8", 8, { origin: "extension", source: "d16" })], { action: "electric" }),
     ]);
     const e = estimateScheme(s, DEFAULT_RATES);
     expect(e.divisions[1].pipes.new).toBe(0); // a 32-note 8′ from a 61-note 16′ shares every pipe
@@ -133,7 +255,7 @@ describe("behaviour", () => {
   });
 
   it("refuses an inconsistent scheme with its messages", () => {
-    const bad = scheme([manual("gt", [stop("e", 8, { treatment: "extension", source: "nowhere" })])]);
+    const bad = scheme([manual("gt", [stop("e", 8, { origin: "extension", source: "nowhere" })])]);
     expect(() => estimateScheme(bad, DEFAULT_RATES)).toThrow(SchemeError);
     try {
       estimateScheme(bad, DEFAULT_RATES);
@@ -160,6 +282,7 @@ describe("properties", () => {
         const e = estimateScheme(s, DEFAULT_RATES);
         const numbers = [
           ...Object.values(e.totals.pipes), ...Object.values(e.totals.hours), ...Object.values(e.totals.metalKg), ...Object.values(e.totals.woodM3),
+          ...Object.values(e.totals.metalBoughtKg), ...Object.values(e.totals.woodBoughtM3), e.wind.blowerKw, e.site.weights.totalKg,
           e.totals.wiring.conductorLengthM, e.programme.totalWeeks, ...e.divisions.flatMap((d) => [d.chest.main.lengthMm, d.chest.main.depthMm]),
         ];
         return numbers.every((n) => Number.isFinite(n) && n >= 0) && !new Decimal(e.money.totalAmount).isNegative();
@@ -174,10 +297,11 @@ describe("properties", () => {
         const rates = { ...DEFAULT_RATES, overheadPercent: (o / 10).toString(), taxPercent: (t / 10).toString() };
         const m = estimateScheme(s, rates).money;
         return (
-          sum([...m.labour.map((l) => l.amount), ...m.materials.map((l) => l.amount)]) === m.subtotalAmount &&
+          sum([...m.labour.map((l) => l.amount), ...m.materials.map((l) => l.amount), ...m.items.map((l) => l.amount)]) === m.subtotalAmount &&
           sum([m.subtotalAmount, m.overhead.amount, m.contingency.amount, m.margin.amount]) === m.netAmount &&
           sum([m.netAmount, m.tax.amount]) === m.totalAmount &&
-          sum(m.byCentre.map((c) => c.directCostAmount)) === m.subtotalAmount
+          sum(m.byCentre.map((c) => c.directCostAmount)) === m.subtotalAmount &&
+          sum(m.byPackage.map((c) => c.directCostAmount)) === m.subtotalAmount
         );
       }),
       { numRuns: 150 },

@@ -1,7 +1,10 @@
 import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { alloyDensityGCm3, containsLead, ELEMENT_DENSITY_G_CM3, isWood, sheetAreaMm2, sheetMassKg, woodBoardVolumeM3 } from "./materials";
+import {
+  alloyDensityGCm3, boardThicknessMm, containsLead, ELEMENT_DENSITY_G_CM3, isWood, sheetAreaMm2, sheetMassKg, sheetThicknessMm,
+  topSheetPerDiameterSq, woodPartsPerSide, woodPipeVolumeM3,
+} from "./materials";
 
 const within = (actual: number, expected: number, fraction: number) => Math.abs(actual - expected) <= expected * fraction;
 
@@ -36,20 +39,9 @@ describe("densities", () => {
     expect(() => alloyDensityGCm3({})).toThrow(/at least one element/);
   });
 
-  it("keeps the default wood densities within the published ranges", () => {
-    // Engineering ToolBox; simetric.co.uk (kg/m³): white pine 350–500, oak 600–900, mahogany ~550–650.
-    const w = DEFAULT_RATES.woodDensityKgM3;
-    expect(w.pine).toBeGreaterThanOrEqual(350);
-    expect(w.pine).toBeLessThanOrEqual(500);
-    expect(w.oak).toBeGreaterThanOrEqual(600);
-    expect(w.oak).toBeLessThanOrEqual(900);
-    expect(w.mahogany).toBeGreaterThanOrEqual(550);
-    expect(w.mahogany).toBeLessThanOrEqual(650);
-  });
-
-  it("knows which default alloys carry lead and which materials are wood", () => {
-    expect(containsLead(DEFAULT_RATES.alloys.spotted)).toBe(true);
-    expect(containsLead(DEFAULT_RATES.alloys.zinc)).toBe(false);
+  it("knows which alloys carry lead and which materials are wood", () => {
+    expect(containsLead({ tin: 0.5, lead: 0.5 })).toBe(true);
+    expect(containsLead({ zinc: 1 })).toBe(false);
     expect(isWood("oak")).toBe(true);
     expect(isWood("copper")).toBe(false);
   });
@@ -60,19 +52,50 @@ describe("sheet and board", () => {
     expect(sheetMassKg(1e6, 1, alloyDensityGCm3({ tin: 0.5, lead: 0.5 }))).toBeCloseTo(8.873, 2);
   });
 
-  it("computes a cylinder's sheet area as π·D·L plus a conical foot and, on stopped pipes, a cap", () => {
-    const open = sheetAreaMm2(1, false, 100, 1000, 0);
+  it("computes a cylinder's sheet area as π·D·L plus a conical foot and, on stopped pipes, a lid", () => {
+    const open = sheetAreaMm2(1, 0, 100, 1000, 0);
     expect(open).toBeCloseTo(Math.PI * 100 * 1000, 6);
-    expect(sheetAreaMm2(1, true, 100, 1000, 0) - open).toBeCloseTo((Math.PI * 100 * 100) / 4, 6);
-    expect(sheetAreaMm2(1, false, 100, 1000, 200) - open).toBeCloseTo(Math.PI * 50 * 200, 6);
+    expect(sheetAreaMm2(1, topSheetPerDiameterSq("stopped", 0.5), 100, 1000, 0) - open).toBeCloseTo((Math.PI * 100 * 100) / 4, 6);
+    expect(sheetAreaMm2(1, 0, 100, 1000, 200) - open).toBeCloseTo(Math.PI * 50 * 200, 6);
+    // A movable cap adds its skirt: π·D·(skirt·D).
+    expect(topSheetPerDiameterSq("capped", 0.5) - topSheetPerDiameterSq("stopped", 0.5)).toBeCloseTo(Math.PI * 0.5, 9);
+    expect(topSheetPerDiameterSq("open", 0.5)).toBe(0);
   });
 
-  it("takes a wooden pipe's board volume as four walls: (a + 2t)² − a² per unit length", () => {
+  it("thins the sheet with the diameter, about 1.0–1.5 mm at 8′ C to 0.3–0.4 mm at the top, thicker for lead-rich metal", () => {
+    // From memory (Töpfer/Ellerhorst tradition); the norm itself is the firm's.
+    const n = DEFAULT_RATES.pipeMetal;
+    const at8ftC = sheetThicknessMm(155.5, "spotted", n);
+    const atTop = sheetThicknessMm(155.5 / 2 ** (60 / 16), "spotted", n);
+    expect(at8ftC).toBeGreaterThanOrEqual(1);
+    expect(at8ftC).toBeLessThanOrEqual(1.5);
+    expect(atTop).toBeGreaterThanOrEqual(0.3);
+    expect(atTop).toBeLessThanOrEqual(0.4);
+    expect(sheetThicknessMm(155.5, "common", n)).toBeGreaterThan(at8ftC);
+    expect(sheetThicknessMm(1, "spotted", n)).toBe(n.minimumThicknessMm);
+  });
+
+  it("boards a 32′ wooden C at 50–75 mm", () => {
+    // From memory (Audsley): boards for 32′ pipes about 50–75 mm. A normal-scale 32′ C is 439.8 mm across, 389.8 mm inside square.
+    const b = boardThicknessMm(439.8 * (Math.sqrt(Math.PI) / 2), DEFAULT_RATES.woodPipes);
+    expect(b).toBeGreaterThanOrEqual(50);
+    expect(b).toBeLessThanOrEqual(75);
+    expect(boardThicknessMm(10, DEFAULT_RATES.woodPipes)).toBe(DEFAULT_RATES.woodPipes.minimumBoardMm);
+  });
+
+  it("takes a wooden pipe's timber as four walls, (a + 2t)² − a² per unit length, plus block, cap and stopper", () => {
+    const none = { solidPerA3: 0, capHeightPerA: 0 };
     fc.assert(
       fc.property(fc.double({ min: 5, max: 400, noNaN: true }), fc.double({ min: 3, max: 40, noNaN: true }), fc.double({ min: 50, max: 6000, noNaN: true }), (a, t, l) => {
         const expected = ((a + 2 * t) ** 2 - a * a) * l * 1e-9;
-        return Math.abs(woodBoardVolumeM3(a, l, t) - expected) <= 1e-12 + expected * 1e-9;
+        return Math.abs(woodPipeVolumeM3(a, l, t, 1, none) - expected) <= 1e-12 + expected * 1e-9;
       }),
     );
+    const n = DEFAULT_RATES.woodPipes;
+    const stopped = woodPartsPerSide("stopped", n);
+    const open = woodPartsPerSide("open", n);
+    expect(stopped.solidPerA3 - open.solidPerA3).toBeCloseTo(n.stopperLengthPerSide, 12);
+    expect(woodPartsPerSide("reed", n)).toEqual(none);
+    expect(woodPipeVolumeM3(100, 1000, 20, 1, open) - woodPipeVolumeM3(100, 1000, 20, 1, none)).toBeCloseTo((n.blockLengthPerSide * 1e6 + n.capHeightPerSide * 100 * 140 * 20) * 1e-9, 12);
   });
 });

@@ -1,21 +1,22 @@
 /**
- * Pipe counts and the layout of ranks, from the scheme alone. Pipes = ranks × notes of the rank's
- * compass (the stop's own, else its division's), mixture ranks one by one; breaks change pitches,
- * not numbers. An extension adds only the notes its own compass needs beyond the rank it draws on
- * (a 32-note pedal 16′ rank extended to 8′ adds 12 — common practice); borrowed stops add none;
- * prepared stops take chest space but no pipes yet; removed stops leave the organ.
- * New, reused (retained, revoiced, relocated) and restored pipes are kept apart.
+ * Pipe counts and the layout of ranks, from the scheme alone: the first stage of an estimate.
+ * Pipes = notes of the rank's compass (the stop's own, else its division's) for every rank, mixture
+ * ranks one by one, progressive ranks only where they sound; breaks change pitches, not numbers.
+ * An extension adds only the notes its own compass needs beyond the rank it draws on (a 32-note
+ * pedal 16′ rank extended to 8′ adds 12 — common practice); borrowed stops add none and must find a
+ * pipe for every note they play; prepared stops take chest space but no pipes yet; removed stops
+ * leave the organ. New, reused and restored pipes are kept apart.
  *
- * The plan it returns (segments of consecutive pipes, chest rows) is what the estimator's per-pipe
- * loop runs over; it also carries every message about an inconsistent scheme.
+ * The plan it returns — runs of consecutive pipes built alike (segments), chest rows — is what the
+ * per-pipe stage (pipe-aggregates.ts) runs over; it also carries every message about an
+ * inconsistent scheme, naming division and stop.
  */
-import type { Division, Scheme, Stop } from "./scheme";
-import { compassNoteCount, noteToMidi, parseCompass } from "./notes";
+import { UNIT_CHESTS, type Division, type Material, type PipeWork, type Scheme, type Stop } from "./scheme";
+import { compassNoteCount, midiToNote, noteToMidi } from "./notes";
 import { formatFootage, harmonicOf8ft, MSG_NOT_FOOTAGE, parseFootage, semitonesAbove8ft, type Fraction } from "./pitch";
-import type { PipeWork } from "./labour";
+import { isWood } from "./materials";
 
 export type StopKind = "own" | "extension" | "borrowed" | "prepared" | "removed";
-export type PipeStatus = "new" | "reused" | "restored";
 
 export interface PipeCounts {
   readonly new: number;
@@ -25,7 +26,7 @@ export interface PipeCounts {
   readonly total: number;
   /** Pipes of prepared-for stops (space and wiring now, pipes later); not in total. */
   readonly prepared: number;
-  /** Existing pipes of removed stops; not in total. */
+  /** Existing pipes that leave the organ (removed stops, surplus of re-scaled ranks); not in total. */
   readonly removed: number;
 }
 
@@ -40,29 +41,37 @@ export function addCounts(a: PipeCounts, b: PipeCounts): PipeCounts {
   return counts(a.new + b.new, a.reused + b.reused, a.restored + b.restored, a.prepared + b.prepared, a.removed + b.removed);
 }
 
-/** What happens to a stop's own pipes, by treatment. */
-export function kindOf(treatment: Stop["treatment"]): StopKind {
-  switch (treatment) {
-    case "extension":
-    case "borrowed":
-    case "prepared":
-    case "removed":
-      return treatment;
-    default:
-      return "own";
-  }
+export function kindOf(origin: Stop["origin"]): StopKind {
+  return origin === "new" || origin === "existing" ? "own" : origin;
 }
 
-export function statusOf(work: PipeWork): PipeStatus {
-  return work === "new" ? "new" : work === "restored" ? "restored" : "reused";
+/** What state a run of pipes is in: made new, existing (with the stop's work), or a prepared position. */
+export const NEW = 0;
+export const EXISTING = 1;
+export const PREPARED = 2;
+export type PipeStatus = typeof NEW | typeof EXISTING | typeof PREPARED;
+
+/** How a run of pipes is built: one rank may have up to three (its basses of another material, its flue top). */
+export interface PipeForm {
+  /** The stop that owns the rank. */
+  readonly stop: number;
+  readonly construction: Stop["construction"];
+  readonly material: Material;
+  readonly reed: boolean;
+  readonly wood: boolean;
+  /** Reeds: resonator length as a fraction of full length; 1 for flues. */
+  readonly resonatorFraction: number;
+  readonly conicalResonator: boolean;
 }
 
-/** A run of consecutive pipes of one rank with one footage: what the per-pipe loop iterates. */
+/** A run of consecutive pipes of one rank with one footage and one form: what the per-pipe stage iterates. */
 export interface Segment {
   /** Global index of the stop the pipes are counted for. */
   readonly stop: number;
-  /** Global index of the stop whose rank they belong to (construction, material, scale). */
+  /** Global index of the stop whose rank they belong to (scale). */
   readonly rank: number;
+  /** Index into plan.forms. */
+  readonly form: number;
   /** Chest row they stand in. */
   readonly row: number;
   readonly fromKey: number;
@@ -75,8 +84,7 @@ export interface Segment {
   readonly channelOffset: number;
   /** The first N pipes of the segment stand on the offset chest. */
   readonly offsetCount: number;
-  /** False for prepared stops: space is taken, no pipes are made. */
-  readonly made: boolean;
+  readonly status: PipeStatus;
 }
 
 export interface ChestRowPlan {
@@ -91,20 +99,25 @@ export interface StopPlan {
   readonly divisionIndex: number;
   readonly stop: Stop;
   readonly kind: StopKind;
-  /** Work on the stop's own pipes; extensions' added pipes are new. */
-  readonly work: PipeWork | null;
+  /** Work on this stop's existing pipes (its own, or an extension's existing added pipes). */
+  readonly work: readonly PipeWork[];
   readonly lowKey: number;
   readonly highKey: number;
   readonly notes: number;
   readonly ranks: number;
+  /** Fewest and most ranks sounding on one key (they differ in a progressive mixture). */
+  readonly ranksFrom: number;
+  readonly ranksTo: number;
   readonly footage: Fraction;
   readonly footageText: string;
   readonly harmonic: Fraction;
   /** Semitones above unison, tempered or pure by the scheme's tuning. */
   readonly shift: number;
-  /** Stop whose rank supplies the pipes (itself for own stops; −1 when unresolved). */
+  /** Stop whose rank supplies the pipes (itself for own and prepared stops; −1 when unresolved). */
   readonly rootIndex: number;
   readonly sourceDivisionIndex: number;
+  /** Forms of the rank this stop owns (own and prepared stops), indexes into plan.forms. */
+  readonly forms: readonly number[];
   readonly pipes: PipeCounts;
 }
 
@@ -115,11 +128,13 @@ export interface DivisionPlan {
   readonly highKey: number;
   readonly notes: number;
   readonly stops: readonly number[];
+  readonly unitChest: boolean;
 }
 
 export interface SchemePlan {
   readonly divisions: readonly DivisionPlan[];
   readonly stops: readonly StopPlan[];
+  readonly forms: readonly PipeForm[];
   readonly segments: readonly Segment[];
   readonly rows: readonly ChestRowPlan[];
   /** Everything inconsistent in the scheme, naming division and stop; empty when the plan is sound. */
@@ -140,31 +155,61 @@ export function where(d: { readonly name: string }, s?: { readonly name: string 
 }
 
 const footageText = (f: string | number) => (typeof f === "number" ? String(f) : f);
+const range = (lo: number, hi: number) => (lo === hi ? midiToNote(lo) : `${midiToNote(lo)}–${midiToNote(hi)}`);
+
+// Parsing footages and note names is the planner's main cost on a large scheme; both are pure
+// functions of short strings, so their results are kept (bounded: a scheme uses a few dozen values).
+const footageMemo = new Map<string | number, Fraction | null>();
+function footageOf(f: string | number): Fraction | null {
+  let v = footageMemo.get(f);
+  if (v === undefined) {
+    v = parseFootage(f);
+    if (footageMemo.size < 512) footageMemo.set(f, v);
+  }
+  return v;
+}
+const noteMemo = new Map<string, number | null>();
+function keyOf(n: string): number | null {
+  let v = noteMemo.get(n);
+  if (v === undefined) {
+    v = noteToMidi(n);
+    if (noteMemo.size < 512) noteMemo.set(n, v);
+  }
+  return v;
+}
+const compassOf = (c: { readonly low: string; readonly high: string }) => {
+  const lowMidi = keyOf(c.low);
+  const highMidi = keyOf(c.high);
+  return lowMidi === null || highMidi === null ? null : { lowMidi, highMidi };
+};
 
 /** Occupancy of sounding semitones (index = semitones above 8′ C + OCC_BASE) for ranks that carry extensions. */
 const OCC_BASE = 96;
 const OCC_SIZE = 256;
 
-/** Resolves a scheme into stops, chest rows and segments of pipes, with pipe counts and messages. */
+type Draft = { -readonly [K in keyof StopPlan]: StopPlan[K] };
+/** A run of keys of one rank at one footage; footage null where a progressive rank is silent. */
+type Run = { fromKey: number; shift: number; footage: Fraction | null };
+
+/** Resolves a scheme into stops, forms, chest rows and segments of pipes, with pipe counts and messages. */
 export function planScheme(scheme: Scheme): SchemePlan {
   const issues: PlanIssue[] = [];
   const say: Say = (path, message) => issues.push({ path, message });
-  const stopPath = (d: { divisionIndex: number; stop: Stop }, field: string) =>
-    ["divisions", d.divisionIndex, "stops", scheme.divisions[d.divisionIndex].stops.indexOf(d.stop), field];
   const tuning = scheme.tuning.mutations;
   const divisions: DivisionPlan[] = [];
   const segments: Segment[] = [];
   const rows: ChestRowPlan[] = [];
+  const forms: PipeForm[] = [];
   const stopById = new Map<string, number>();
   const divisionIds = new Set<string>();
-
-  type Draft = { -readonly [K in keyof StopPlan]: StopPlan[K] };
   const drafts: Draft[] = [];
+  const stopPath = (d: Draft, field: string) => ["divisions", d.divisionIndex, "stops", scheme.divisions[d.divisionIndex].stops.indexOf(d.stop), field];
+  const atOf = (d: Draft) => where(scheme.divisions[d.divisionIndex], d.stop);
 
   scheme.divisions.forEach((division, di) => {
     if (divisionIds.has(division.id)) say(["divisions", di, "id"], `${where(division)}: the id "${division.id}" is used by another division`);
     divisionIds.add(division.id);
-    let c = parseCompass(division.compass);
+    let c = compassOf(division.compass);
     if (!c) {
       say(["divisions", di, "compass"], `${where(division)}: compass ${division.compass.low}–${division.compass.high} is not in note names such as C, c', c''''`);
       c = { lowMidi: 36, highMidi: 96 };
@@ -181,35 +226,38 @@ export function planScheme(scheme: Scheme): SchemePlan {
       let lowKey = c.lowMidi;
       let highKey = c.highMidi;
       if (stop.compass) {
-        const sc = parseCompass(stop.compass);
+        const sc = compassOf(stop.compass);
         if (!sc) say(sp("compass"), `${at}: compass ${stop.compass.low}–${stop.compass.high} is not in note names`);
         else if (sc.lowMidi > sc.highMidi) say(sp("compass"), `${at}: compass runs downward (${stop.compass.low} to ${stop.compass.high}); give the lowest note first`);
         else if (sc.lowMidi < c.lowMidi || sc.highMidi > c.highMidi)
           say(sp("compass"), `${at}: compass ${stop.compass.low}–${stop.compass.high} goes beyond the division's ${division.compass.low}–${division.compass.high}`);
         else [lowKey, highKey] = [sc.lowMidi, sc.highMidi];
       }
-      const footage = parseFootage(stop.footage);
+      const footage = footageOf(stop.footage);
       if (!footage) say(sp("footage"), `${at}: footage "${footageText(stop.footage)}" ${MSG_NOT_FOOTAGE}`);
       const f = footage ?? { num: 8, den: 1 };
       const notes = compassNoteCount(lowKey, highKey);
-      if (stop.offsetBassPipes > notes) say(sp("offsetBassPipes"), `${at}: ${stop.offsetBassPipes} offset bass pipes, but the stop has only ${notes} notes`);
-      const kind = kindOf(stop.treatment);
+      const kind = kindOf(stop.origin);
+      checkStopFields(stop, kind, notes, lowKey, highKey, at, sp, say);
       drafts.push({
-        index, divisionIndex: di, stop, kind,
-        work: kind === "own" ? (stop.treatment as PipeWork) : null,
-        lowKey, highKey, notes, ranks: stop.ranks, footage: f, footageText: formatFootage(f), harmonic: harmonicOf8ft(f),
+        index, divisionIndex: di, stop, kind, work: [...new Set(stop.work)],
+        lowKey, highKey, notes, ranks: stop.ranks, ranksFrom: stop.ranks, ranksTo: stop.ranks,
+        footage: f, footageText: formatFootage(f), harmonic: harmonicOf8ft(f),
         shift: semitonesAbove8ft(f, tuning), rootIndex: kind === "own" || kind === "prepared" ? index : -1,
-        sourceDivisionIndex: di, pipes: NO_PIPES,
+        sourceDivisionIndex: di, forms: [], pipes: NO_PIPES,
       });
       stopIndexes.push(index);
     });
-    divisions.push({ index: di, division, lowKey: c.lowMidi, highKey: c.highMidi, notes: compassNoteCount(c.lowMidi, c.highMidi), stops: stopIndexes });
+    divisions.push({
+      index: di, division, lowKey: c.lowMidi, highKey: c.highMidi, notes: compassNoteCount(c.lowMidi, c.highMidi), stops: stopIndexes,
+      unitChest: UNIT_CHESTS.includes(division.chest),
+    });
   });
 
   // Sources of extensions and borrowings, followed to the stop that owns the rank.
   for (const d of drafts) {
     if (d.kind !== "extension" && d.kind !== "borrowed") continue;
-    const at = where(scheme.divisions[d.divisionIndex], d.stop);
+    const at = atOf(d);
     const label = d.kind === "extension" ? "extension source" : "borrowed source";
     if (!d.stop.source) {
       say(stopPath(d, "source"), `${at}: an ${d.kind === "extension" ? "extension" : "borrowed stop"} needs a source stop`);
@@ -254,36 +302,86 @@ export function planScheme(scheme: Scheme): SchemePlan {
     d.sourceDivisionIndex = drafts[src].divisionIndex;
   }
 
-  // Own and prepared ranks: one chest row per rank, one segment per break range.
+  // Chest rules: a rank plays from another keyboard or at another pitch only from a unit chest, or
+  // (at its own pitch) from a duplexed slider chest (common practice).
   for (const d of drafts) {
-    const division = scheme.divisions[d.divisionIndex];
-    const at = where(division, d.stop);
+    if ((d.kind !== "extension" && d.kind !== "borrowed") || d.rootIndex < 0) continue;
+    const root = drafts[d.rootIndex];
+    const rootDivision = scheme.divisions[root.divisionIndex];
+    if (divisions[root.divisionIndex].unitChest) continue;
+    const chest = `the ${rootDivision.name}'s ${rootDivision.chest} chest`;
+    const samePitch = semitonesAbove8ft(d.footage) === semitonesAbove8ft(root.footage);
+    if (d.kind === "extension") {
+      say(stopPath(d, "source"), `${atOf(d)}: an extension needs its rank on a unit chest (pitman or direct-electric), but "${root.stop.name}" stands on ${chest}`);
+    } else if (!samePitch) {
+      say(stopPath(d, "source"), `${atOf(d)}: borrowing "${root.stop.name}" at another pitch needs its rank on a unit chest (pitman or direct-electric), but it stands on ${chest}`);
+    } else if (root.divisionIndex !== d.divisionIndex && !root.stop.duplex) {
+      say(stopPath(d, "source"), `${atOf(d)}: "${root.stop.name}" stands on ${chest} and plays only from its own keys; duplex "${root.stop.name}" or put its rank on a unit chest (pitman or direct-electric)`);
+    }
+  }
+
+  // Own and prepared ranks: forms, one chest row per rank, segments per break range, form and state.
+  for (const d of drafts) {
     if (d.kind === "removed") {
       d.pipes = counts(0, 0, 0, 0, d.ranks * d.notes);
       continue;
     }
     if (d.kind !== "own" && d.kind !== "prepared") continue;
-    const rankFootages = breakPlan(d, at, tuning, (field, message) => say(stopPath(d, field), message));
+    d.forms = formsOf(d, forms);
+    const rankRuns = breakPlan(d, atOf(d), tuning, (field, message) => say(stopPath(d, field), message));
+    const status: PipeStatus = d.kind === "prepared" ? PREPARED : d.stop.origin === "existing" ? EXISTING : NEW;
+    // Re-scaled ranks: the pipes move by rescaleHt keys; the keys they leave empty get new pipes.
+    const shiftBy = status === EXISTING && d.work.includes("rescaled") ? d.stop.rescaleHt : 0;
+    const newBelow = shiftBy > 0 ? d.lowKey + shiftBy : -Infinity;
+    const newAbove = shiftBy < 0 ? d.highKey + shiftBy : Infinity;
+    let made = 0;
+    let fresh = 0;
+    const perKey = new Uint8Array(d.notes);
     for (let r = 0; r < d.ranks; r++) {
       const row = rows.length;
       rows.push({ division: d.divisionIndex, stop: d.index, rank: r });
-      const runs = rankFootages[r];
+      const runs = rankRuns[r];
       for (let k = 0; k < runs.length; k++) {
-        const from = runs[k].fromKey;
+        const run = runs[k];
+        const from = run.fromKey;
         const to = k + 1 < runs.length ? runs[k + 1].fromKey - 1 : d.highKey;
-        const count = to - from + 1;
-        if (count <= 0) continue;
-        segments.push({
-          stop: d.index, rank: d.index, row, fromKey: from, count, shift: runs[k].shift, footage: runs[k].footage, channelOffset: 0,
-          offsetCount: Math.max(0, Math.min(count, d.lowKey + d.stop.offsetBassPipes - from)), made: d.kind === "own",
-        });
+        if (to < from || !run.footage) continue; // empty, or a progressive rank silent in this range
+        for (let key = from; key <= to; key++) perKey[key - d.lowKey]++;
+        // Split the run where the form or the state changes: basses, flue top, re-scaled ends.
+        const cuts = [from, to + 1];
+        const bassEnd = d.stop.bass ? d.lowKey + d.stop.bass.notes : -Infinity;
+        const flueFrom = d.stop.construction === "reed" && d.stop.fluesFrom ? keyOf(d.stop.fluesFrom) ?? Infinity : Infinity;
+        for (const cut of [bassEnd, flueFrom, newBelow, newAbove + 1]) if (cut > from && cut <= to) cuts.push(cut);
+        cuts.sort((a, b) => a - b);
+        for (let c = 0; c + 1 < cuts.length; c++) {
+          const a = cuts[c];
+          const count = cuts[c + 1] - a;
+          if (count <= 0) continue;
+          const isNew = status === EXISTING && (a < newBelow || a > newAbove);
+          const form = a < bassEnd ? d.forms[1] : a >= flueFrom ? d.forms[d.forms.length - 1] : d.forms[0];
+          segments.push({
+            stop: d.index, rank: d.index, form, row, fromKey: a, count, shift: run.shift, footage: run.footage!, channelOffset: 0,
+            offsetCount: Math.max(0, Math.min(count, d.lowKey + d.stop.offsetBassPipes - a)), status: isNew ? NEW : status,
+          });
+          made += count;
+          if (isNew) fresh += count;
+        }
       }
     }
-    const n = d.ranks * d.notes;
-    if (d.kind === "prepared") d.pipes = counts(0, 0, 0, n, 0);
+    let lo = Infinity;
+    let hi = 0;
+    for (const n of perKey) {
+      if (n < lo) lo = n;
+      if (n > hi) hi = n;
+    }
+    d.ranksFrom = d.notes ? lo : d.ranks;
+    d.ranksTo = d.notes ? hi : d.ranks;
+    if (status === PREPARED) d.pipes = counts(0, 0, 0, made, 0);
+    else if (status === NEW) d.pipes = counts(made, 0, 0, 0, 0);
     else {
-      const s = statusOf(d.work!);
-      d.pipes = counts(s === "new" ? n : 0, s === "reused" ? n : 0, s === "restored" ? n : 0, 0, 0);
+      const old = made - fresh;
+      const restored = d.work.includes("restored");
+      d.pipes = counts(fresh, restored ? 0 : old, restored ? old : 0, 0, fresh);
     }
   }
 
@@ -291,52 +389,151 @@ export function planScheme(scheme: Scheme): SchemePlan {
   const occupancy = new Map<number, Uint8Array>();
   const rowOfRank = new Map<number, number>();
   rows.forEach((r, i) => r.rank === 0 && rowOfRank.set(r.stop, i));
+  const occupancyOf = (root: Draft) => {
+    let occ = occupancy.get(root.index);
+    if (!occ) {
+      occ = new Uint8Array(OCC_SIZE);
+      const rootShiftT = semitonesAbove8ft(root.footage, "tempered");
+      for (let k = root.lowKey; k <= root.highKey; k++) occ[k - 36 + rootShiftT + OCC_BASE] = 1;
+      occupancy.set(root.index, occ);
+    }
+    return occ;
+  };
   for (const d of drafts) {
     if (d.kind !== "extension" || d.rootIndex < 0) continue;
     const root = drafts[d.rootIndex];
     const rootShiftT = semitonesAbove8ft(root.footage, "tempered");
     const extShiftT = semitonesAbove8ft(d.footage, "tempered");
-    let occ = occupancy.get(root.index);
-    if (!occ) {
-      occ = new Uint8Array(OCC_SIZE);
-      for (let k = root.lowKey; k <= root.highKey; k++) occ[k - 36 + rootShiftT + OCC_BASE] = 1;
-      occupancy.set(root.index, occ);
-    }
-    const made = root.kind === "own";
+    const occ = occupancyOf(root);
+    const status: PipeStatus = root.kind === "prepared" ? PREPARED : d.stop.addedPipes === "existing" ? EXISTING : NEW;
     const row = rowOfRank.get(root.index)!;
+    // The rank's forms hold by sounding pitch: added basses take the basses' form, added trebles the flue top's.
+    const bassBelowSounding = root.stop.bass ? root.lowKey + root.stop.bass.notes + rootShiftT : -Infinity;
+    const flueKey = root.stop.construction === "reed" && root.stop.fluesFrom ? keyOf(root.stop.fluesFrom) : null;
+    const flueFromSounding = flueKey === null ? Infinity : flueKey + rootShiftT;
+    const formAt = (sounding: number) =>
+      sounding < bassBelowSounding ? root.forms[1] : sounding >= flueFromSounding ? root.forms[root.forms.length - 1] : root.forms[0];
     let added = 0;
     let offsetLeft = d.stop.offsetBassPipes;
     let runFrom = -1;
+    let runForm = -1;
+    const close = (k: number) => {
+      // A run of added notes ends: one segment; its lowest pipes take what is left of the offset basses.
+      const count = k - runFrom;
+      const offsetCount = Math.min(offsetLeft, count);
+      offsetLeft -= offsetCount;
+      segments.push({
+        stop: d.index, rank: root.index, form: runForm, row, fromKey: runFrom, count, shift: d.shift, footage: d.footage,
+        channelOffset: extShiftT - rootShiftT, offsetCount, status,
+      });
+      runFrom = -1;
+    };
     for (let k = d.lowKey; k <= d.highKey + 1; k++) {
       const i = k - 36 + extShiftT + OCC_BASE;
       const free = k <= d.highKey && i >= 0 && i < OCC_SIZE && occ[i] === 0;
+      const form = free ? formAt(k + extShiftT) : -1;
+      if (runFrom >= 0 && (!free || form !== runForm)) close(k);
       if (free) {
         occ[i] = 1;
         added++;
-        if (runFrom < 0) runFrom = k;
-      } else if (runFrom >= 0) {
-        // A run of added notes ends: one segment; its lowest pipes take what is left of the offset basses.
-        const count = k - runFrom;
-        const offsetCount = Math.min(offsetLeft, count);
-        offsetLeft -= offsetCount;
-        segments.push({
-          stop: d.index, rank: root.index, row, fromKey: runFrom, count, shift: d.shift, footage: d.footage,
-          channelOffset: extShiftT - rootShiftT, offsetCount, made,
-        });
-        runFrom = -1;
+        if (runFrom < 0) [runFrom, runForm] = [k, form];
       }
     }
-    d.pipes = made ? counts(added, 0, 0, 0, 0) : counts(0, 0, 0, added, 0);
+    const restored = d.work.includes("restored");
+    d.pipes =
+      status === PREPARED ? counts(0, 0, 0, added, 0)
+      : status === NEW ? counts(added, 0, 0, 0, 0)
+      : counts(0, restored ? 0 : added, restored ? added : 0, 0, 0);
+  }
+
+  // Borrowings must find a pipe of their rank (with its extensions) for every note they play.
+  for (const d of drafts) {
+    if (d.kind !== "borrowed" || d.rootIndex < 0) continue;
+    const root = drafts[d.rootIndex];
+    const rootShiftT = semitonesAbove8ft(root.footage, "tempered");
+    const shiftT = semitonesAbove8ft(d.footage, "tempered");
+    const occ = occupancy.get(root.index);
+    const has = (k: number) => {
+      const s = k - 36 + shiftT;
+      if (occ) return s + OCC_BASE >= 0 && s + OCC_BASE < OCC_SIZE && occ[s + OCC_BASE] === 1;
+      const j = k + shiftT - rootShiftT;
+      return j >= root.lowKey && j <= root.highKey;
+    };
+    const missing: [number, number][] = [];
+    for (let k = d.lowKey; k <= d.highKey; k++) {
+      if (has(k)) continue;
+      const last = missing[missing.length - 1];
+      if (last && last[1] === k - 1) last[1] = k;
+      else missing.push([k, k]);
+    }
+    if (missing.length) {
+      const rootDivision = scheme.divisions[root.divisionIndex].name;
+      say(
+        stopPath(d, "source"),
+        `${atOf(d)}: "${root.stop.name}" ${root.footageText}′ (${rootDivision}) has no pipe for ${missing.map(([a, b]) => range(a, b)).join(", ")} at ${d.footageText}′; a borrowing must find a pipe for every note it plays — make it an extension, or give it a shorter compass`,
+      );
+    }
   }
 
   checkAccessories(scheme, divisionIds, say);
-  return { divisions, stops: drafts, segments, rows, messages: issues.map((i) => i.message), issues };
+  return { divisions, stops: drafts, forms, segments, rows, messages: issues.map((i) => i.message), issues };
 }
 
-/** Per rank, the runs of keys with one footage: from the breaks for mixtures, else the stop's footage. */
-function breakPlan(
-  d: StopPlan, at: string, tuning: Scheme["tuning"]["mutations"], say: (field: string, message: string) => void,
-): { fromKey: number; shift: number; footage: Fraction }[][] {
+/** The forms of a rank: its main form, then its basses' (if another material), then a reed's flue top. */
+function formsOf(d: Draft, forms: PipeForm[]): number[] {
+  const s = d.stop;
+  const reed = s.construction === "reed";
+  const main: PipeForm = {
+    stop: d.index, construction: s.construction, material: s.material, reed, wood: isWood(s.material),
+    resonatorFraction: reed ? RESONATOR[s.resonator?.length ?? "full"] : 1, conicalResonator: reed && (s.resonator?.shape ?? "conical") === "conical",
+  };
+  const out = [forms.push(main) - 1];
+  if (s.bass) {
+    const construction = reed ? "reed" : s.bass.construction ?? s.construction;
+    out.push(forms.push({ ...main, construction, material: s.bass.material, wood: isWood(s.bass.material) }) - 1);
+  }
+  if (reed && s.fluesFrom) {
+    out.push(forms.push({ ...main, construction: "open", reed: false, resonatorFraction: 1, conicalResonator: false }) - 1);
+  }
+  return out;
+}
+
+const RESONATOR = { full: 1, half: 1 / 2, quarter: 1 / 4, eighth: 1 / 8, sixteenth: 1 / 16 } as const;
+
+/** Field rules a single stop can break on its own. */
+function checkStopFields(
+  stop: Stop, kind: StopKind, notes: number, lowKey: number, highKey: number, at: string,
+  sp: (field: string) => (string | number)[], say: Say,
+): void {
+  if (stop.offsetBassPipes > notes) say(sp("offsetBassPipes"), `${at}: ${stop.offsetBassPipes} offset bass pipes, but the stop has only ${notes} notes`);
+  const existingPipes = stop.origin === "existing" || (stop.origin === "extension" && stop.addedPipes === "existing");
+  if (stop.work.length && !existingPipes)
+    say(sp("work"), `${at}: ${stop.work.join(", ")} is work on existing pipes, and this stop has none (it is ${stop.origin})`);
+  if (new Set(stop.work).size !== stop.work.length) say(sp("work"), `${at}: each kind of work is given once`);
+  if (stop.work.includes("rescaled") && stop.rescaleHt === 0)
+    say(sp("rescaleHt"), `${at}: re-scaled, but by how many semitones? Give the semitones the pipes move (+ up, − down)`);
+  if (!stop.work.includes("rescaled") && stop.rescaleHt !== 0)
+    say(sp("rescaleHt"), `${at}: pipes moved ${stop.rescaleHt} semitones, but the work does not say re-scaled`);
+  if (stop.work.includes("rescaled") && Math.abs(stop.rescaleHt) >= notes && notes > 0)
+    say(sp("rescaleHt"), `${at}: pipes moved ${stop.rescaleHt} semitones on a rank of ${notes} notes leave none in place`);
+  if (stop.construction !== "reed") {
+    if (stop.fluesFrom) say(sp("fluesFrom"), `${at}: only a reed breaks to flue pipes at the top`);
+    if (stop.resonator) say(sp("resonator"), `${at}: only a reed has a resonator length; a flue is ${stop.construction}`);
+  } else if (stop.fluesFrom) {
+    const k = noteToMidi(stop.fluesFrom);
+    if (k === null || k <= lowKey || k > highKey) say(sp("fluesFrom"), `${at}: flue pipes from ${stop.fluesFrom}, which lies outside the stop's compass above its lowest note`);
+  }
+  if (stop.bass && stop.bass.notes >= notes && notes > 0)
+    say(sp("bass"), `${at}: ${stop.bass.notes} basses of ${stop.bass.material} on a stop of ${notes} notes leave no trebles`);
+  if (stop.bass && stop.construction === "reed" && stop.bass.construction) say(sp("bass"), `${at}: a reed's basses are reeds; give only their material`);
+  if (stop.duplex && kind !== "own" && kind !== "prepared") say(sp("duplex"), `${at}: only a stop with its own rank can be duplexed`);
+}
+
+/**
+ * Per rank, the runs of keys with one footage: from the breaks for mixtures, else the stop's
+ * footage. A run is null where a progressive mixture's rank is silent.
+ */
+function breakPlan(d: Draft, at: string, tuning: Scheme["tuning"]["mutations"], say: (field: string, message: string) => void): Run[][] {
   const plain = () => Array.from({ length: d.ranks }, () => [{ fromKey: d.lowKey, shift: d.shift, footage: d.footage }]);
   const breaks = d.stop.breaks;
   if (!breaks || breaks.length === 0) {
@@ -344,11 +541,11 @@ function breakPlan(
       say("breaks", `${at}: a ${d.stop.family} of ${d.ranks} ranks needs breaks giving each rank's footage`);
     return plain();
   }
-  const out: { fromKey: number; shift: number; footage: Fraction }[][] = Array.from({ length: d.ranks }, () => []);
+  const out: Run[][] = Array.from({ length: d.ranks }, () => []);
   let prevKey = -Infinity;
   let ok = true;
   breaks.forEach((b, bi) => {
-    const key = noteToMidi(b.from);
+    const key = keyOf(b.from);
     if (key === null) {
       say("breaks", `${at}: break "${b.from}" is not a note name`);
       ok = false;
@@ -366,12 +563,21 @@ function breakPlan(
       say("breaks", `${at}: break at ${b.from} lies outside the stop's compass`);
       ok = false;
     }
+    if (b.footages.every((f) => f === null)) {
+      say("breaks", `${at}: the break at ${b.from} leaves every rank silent`);
+      ok = false;
+    }
     prevKey = key;
     const fromKey = bi === 0 ? d.lowKey : key; // the first break range starts at the rank's lowest note
     for (let r = 0; r < Math.min(d.ranks, b.footages.length); r++) {
-      const f = parseFootage(b.footages[r]);
+      const text = b.footages[r];
+      if (text === null) {
+        out[r].push({ fromKey, shift: 0, footage: null });
+        continue;
+      }
+      const f = footageOf(text);
       if (!f) {
-        say("breaks", `${at}: break at ${b.from}, rank ${r + 1}: footage "${footageText(b.footages[r])}" ${MSG_NOT_FOOTAGE}`);
+        say("breaks", `${at}: break at ${b.from}, rank ${r + 1}: footage "${footageText(text)}" ${MSG_NOT_FOOTAGE}`);
         ok = false;
         continue;
       }

@@ -1,14 +1,16 @@
 /**
  * The programme: weeks per department = hours ÷ (crew × hours per week × efficiency), in phases in
- * order — dismantle and pack → workshop (departments in parallel, the longest sets the phase) →
- * transport → erection → tonal finishing — from the start date to completion, against the target.
+ * order — design and drawings → dismantle and pack → workshop (departments in parallel, the longest
+ * sets the phase) → transport → erection → tonal finishing — from the start date to completion,
+ * against the target. Project management runs alongside every phase and sets none.
  */
 import type { Rates } from "./rates";
-import type { Department } from "./labour";
+import type { Department } from "./departments";
 
 export const phases = [
+  { id: "design", label: "Design and drawings", departments: ["design"] },
   { id: "dismantle", label: "Dismantle and pack", departments: ["dismantling"] },
-  { id: "workshop", label: "Workshop", departments: ["metalPipes", "woodPipes", "reeds", "voicing", "chestAction", "console", "electrics"] },
+  { id: "workshop", label: "Workshop", departments: ["metalPipes", "woodPipes", "reeds", "voicing", "chestAction", "casework", "console", "electrics"] },
   { id: "transport", label: "Transport", departments: ["transport"] },
   { id: "erection", label: "Erection", departments: ["erection"] },
   { id: "finishing", label: "Tonal finishing", departments: ["tonalFinishing"] },
@@ -37,7 +39,8 @@ export interface Programme {
 
 /** Weeks rounded up to tenths: a programme should not promise less than the hours need. */
 export function ceilWeeks(w: number): number {
-  return Math.ceil(w * 10 - 1e-9) / 10;
+  // "+ 0" turns the −0 that ceil gives for no hours into 0.
+  return Math.ceil(w * 10 - 1e-9) / 10 + 0;
 }
 
 /** Weeks a department needs for its hours. */

@@ -1,51 +1,76 @@
 import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
-import { parseRates, ratesSchema } from "./rates";
-import { departments, sizeClasses } from "./labour";
+import { z } from "zod";
+import { parseRates, ratesSchema, withoutPrices } from "./rates";
+import { estimateScheme } from "./estimate";
+import { manual, scheme, stop } from "./test-support/schemes";
 
 describe("rates and norms", () => {
-  it("ships a complete default set that its own schema accepts", () => {
+  it("ships a complete default set that its own schema accepts, marked as invented", () => {
     expect(ratesSchema.safeParse(DEFAULT_RATES).success).toBe(true);
-    for (const d of departments) {
-      expect(Number(DEFAULT_RATES.hourlyRate[d])).toBeGreaterThan(0);
-      expect(DEFAULT_RATES.programme.crew[d]).toBeGreaterThanOrEqual(1);
-    }
-    for (const c of sizeClasses) expect(DEFAULT_RATES.norms.newMetalPipe[c]).toBeGreaterThan(0);
-  });
-
-  it("marks the defaults as invented demo values", () => {
     expect(DEFAULT_RATES.provenance).toMatch(/invented demo values/);
   });
 
-  it("makes longer pipes cost more hours in every by-size norm", () => {
-    for (const norm of ["newMetalPipe", "newWoodPipe", "reedResonator", "reedParts", "restoreMetalPipe", "restoreWoodPipe", "restoreReedParts"] as const) {
-      const v = sizeClasses.map((c) => DEFAULT_RATES.norms[norm][c]);
-      for (let i = 1; i < v.length; i++) expect(v[i], `${norm} ${sizeClasses[i]}`).toBeLessThan(v[i - 1]);
+  it("labels every rate and norm with a title, so a rate book can be built from the schema alone", () => {
+    const json = z.toJSONSchema(ratesSchema) as { properties: Record<string, unknown> };
+    const unlabelled: string[] = [];
+    const walk = (node: unknown, path: string, parentTitled: boolean) => {
+      if (!node || typeof node !== "object") return;
+      const n = node as { title?: string; properties?: Record<string, unknown>; type?: string };
+      if (n.properties) {
+        for (const [k, v] of Object.entries(n.properties)) walk(v, `${path}.${k}`, parentTitled || !!n.title);
+        return;
+      }
+      if (!n.title && !parentTitled) unlabelled.push(path);
+    };
+    walk(json, "rates", false);
+    expect(unlabelled).toEqual([]);
+  });
+
+  it("charges more hours for a longer pipe in every by-size norm the estimate uses", () => {
+    // Behaviour, not data: the same stop an octave lower takes more hours to make, restore and voice.
+    for (const origin of ["new", "existing"] as const) {
+      const hours = (footage: number) =>
+        estimateScheme(scheme([manual("gt", [stop("s", footage, { origin, work: origin === "existing" ? ["restored"] : [] })])]), DEFAULT_RATES).divisions[0].stops[0].pipeHours;
+      expect(hours(16), origin).toBeGreaterThan(hours(8));
+      expect(hours(8), origin).toBeGreaterThan(hours(4));
     }
   });
 
   it("fills what a firm leaves out from the defaults", () => {
-    const r = parseRates({ norms: { erectPerPipe: 0.2 }, alloys: { spotted: { tin: 0.45, lead: 0.55 } } }, DEFAULT_RATES);
+    const r = parseRates({ norms: { erectPerPipe: 0.2 }, items: { keyboard: "3000.00" }, alloys: { spotted: { tin: 0.45, lead: 0.55 } } }, DEFAULT_RATES);
     expect(r.ok).toBe(true);
     if (r.ok) {
       expect(r.rates.norms.erectPerPipe).toBe(0.2);
       expect(r.rates.norms.erectPerDivision).toBe(DEFAULT_RATES.norms.erectPerDivision);
+      expect(r.rates.items.keyboard).toBe("3000.00");
+      expect(r.rates.items.pedalboard).toBe(DEFAULT_RATES.items.pedalboard);
       expect(r.rates.alloys.spotted).toEqual({ tin: 0.45, lead: 0.55 });
       expect(r.rates.alloys.common).toEqual(DEFAULT_RATES.alloys.common);
     }
   });
 
   it("names the field of a bad value", () => {
-    const r = parseRates({ hourlyRate: { voicing: "seventy" }, programme: { efficiency: 1.5 }, alloys: { zinc: { zinc: 0.5 } } }, DEFAULT_RATES);
+    const r = parseRates({ hourlyRate: { voicing: "seventy" }, programme: { efficiency: 1.5 }, alloys: { zinc: { zinc: 0.5 } }, items: { blowerBase: -1 } }, DEFAULT_RATES);
     expect(r.ok).toBe(false);
     if (!r.ok) {
       expect(r.messages.some((m) => m.startsWith("Rates: hourlyRate.voicing:"))).toBe(true);
       expect(r.messages.some((m) => m.startsWith("Rates: programme.efficiency:"))).toBe(true);
       expect(r.messages.some((m) => m.startsWith("Rates: alloys.zinc:") && /add up to 1/.test(m))).toBe(true);
+      expect(r.messages.some((m) => m.startsWith("Rates: items.blowerBase:"))).toBe(true);
     }
   });
 
   it("refuses rates that are not an object", () => {
     expect(parseRates([1, 2], DEFAULT_RATES).ok).toBe(false);
+  });
+
+  it("withholds every price, bought-in items included, from a role without money", () => {
+    const r = withoutPrices(DEFAULT_RATES);
+    expect(Object.values(r.items).every((a) => a === "0.00")).toBe(true);
+    expect(Object.values(r.hourlyRate).every((a) => a === "0.00")).toBe(true);
+    const e = estimateScheme(scheme([manual("gt", [stop("p", 8)])]), r);
+    expect(e.money.totalAmount).toBe("0.00");
+    expect(e.totals.hoursTotal).toBe(estimateScheme(scheme([manual("gt", [stop("p", 8)])]), DEFAULT_RATES).totals.hoursTotal);
   });
 });

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { diameterMm, diameterRatioPerSemitone, mouthWidthMm, squareSideMm } from "./scale";
 
-const NORMAL = { offsetHt: 0, halvingOn: 17 };
+const NORMAL = { deviationHt: 0, halvingOn: 17, referenceSemitones: 0 };
 
 describe("Töpfer's normal scale", () => {
   it("gives the published C diameters within 0.2 mm", () => {
@@ -22,13 +22,29 @@ describe("Töpfer's normal scale", () => {
   it("widens by a semitone per +1 ht: middle c′ 54.9 mm, −2 ht 50.4, +1 ht 57.4", () => {
     // Same article's worked example for c′ of an 8′ rank (24 semitones above 8′ C).
     expect(diameterMm(24, NORMAL)).toBeCloseTo(54.9, 0);
-    expect(Math.abs(diameterMm(24, { offsetHt: -2, halvingOn: 17 }) - 50.4)).toBeLessThanOrEqual(0.1);
-    expect(Math.abs(diameterMm(24, { offsetHt: 1, halvingOn: 17 }) - 57.4)).toBeLessThanOrEqual(0.1);
+    expect(Math.abs(diameterMm(24, { ...NORMAL, deviationHt: -2 }) - 50.4)).toBeLessThanOrEqual(0.1);
+    expect(Math.abs(diameterMm(24, { ...NORMAL, deviationHt: 1 }) - 57.4)).toBeLessThanOrEqual(0.1);
   });
 
-  it("pivots every halving ratio on 8′ C", () => {
-    for (const h of [15, 16, 18, 20]) expect(diameterMm(0, { offsetHt: 0, halvingOn: h })).toBeCloseTo(155.5, 9);
-    expect(diameterMm(24, { offsetHt: 0, halvingOn: 19 })).toBeGreaterThan(diameterMm(24, NORMAL));
+  it("reads a deviation at the rank's own C, whatever its halving note", () => {
+    // A 4′ rank halving on the 19th note, 2 ht narrow: at 4′ C it is exactly the normal 4′ C two semitones narrower,
+    // as a practitioner reads it; measured from 8′ C the same numbers would have given a pipe 1.3 semitones off.
+    for (const [ref, h] of [[12, 19], [24, 15], [19, 20], [0, 18]] as const)
+      for (const dev of [-3, 0, 2]) {
+        const atRef = diameterMm(ref, { deviationHt: dev, halvingOn: h, referenceSemitones: ref });
+        expect(atRef).toBeCloseTo(diameterMm(ref - dev, NORMAL), 9);
+      }
+    // On the normal halving the reference note does not matter.
+    expect(diameterMm(30, { deviationHt: -2, halvingOn: 17, referenceSemitones: 12 })).toBeCloseTo(diameterMm(30, { ...NORMAL, deviationHt: -2 }), 9);
+  });
+
+  it("halves on the scale's own note from the reference", () => {
+    fc.assert(
+      fc.property(fc.integer({ min: 12, max: 24 }), fc.integer({ min: -24, max: 48 }), (h, s) => {
+        const scale = { deviationHt: 1, halvingOn: h, referenceSemitones: 12 };
+        return Math.abs(diameterMm(s + h - 1, scale) - diameterMm(s, scale) / 2) < 1e-9;
+      }),
+    );
   });
 });
 

@@ -1,9 +1,13 @@
 /**
  * The scheme model the estimator takes: the contract between the editor, the file format
  * (docs/scheme-format.md), the server and the command line. Pure zod, no I/O.
+ *
+ * Older files and stored schemes are read unchanged: `upgradeStop` turns a stop of the first format
+ * (one `treatment` word, `reed-full` / `reed-half`, a scale offset measured at 8′ C) into this one
+ * before zod sees it, keeping every pipe's size.
  */
 import { z } from "zod";
-import { MAX_FOOTAGE_TEXT, MSG_NOT_FOOTAGE, parseFootage } from "./pitch";
+import { MAX_FOOTAGE_TEXT, MSG_NOT_FOOTAGE, parseFootage, semitonesAbove8ft } from "./pitch";
 
 /** Ids of divisions, stops, couplers and tremulants: short words chosen by the editor ("gt-od"). */
 const MAX_ID = 64;
@@ -32,28 +36,63 @@ export const footageSchema = z
   .refine((f) => parseFootage(f) !== null, { error: (issue) => `"${String(issue.input)}" ${MSG_NOT_FOOTAGE}` });
 
 export const families = ["principal", "flute", "string", "reed", "hybrid", "mutation", "mixture"] as const;
-export const constructions = ["open", "stopped", "half-stopped", "conical", "capped", "reed-full", "reed-half"] as const;
-export const treatments = [
-  "new", "retained", "restored", "revoiced", "relocated", "extension", "borrowed", "prepared", "removed",
+/**
+ * How a pipe is built (docs/estimating-method.md, "Constructions"): open; conical (open, tapering);
+ * stopped (closed by a stopper or a soldered lid) and capped (closed by a movable metal cap) both
+ * speak as stopped pipes; half-stopped (a stopped pipe with a chimney); reed (a reed with a
+ * resonator whose length and shape `resonator` gives).
+ */
+export const constructions = ["open", "conical", "stopped", "capped", "half-stopped", "reed"] as const;
+/** Flue constructions only: what a reed's top or a stop's basses may be built as. */
+export const flueConstructions = ["open", "conical", "stopped", "capped", "half-stopped"] as const;
+/** Where a stop's pipes come from. `removed`: existing pipes that leave the organ. */
+export const origins = ["new", "existing", "extension", "borrowed", "prepared", "removed"] as const;
+/** What is done to existing pipes; none of them means kept as they are (cleaned). */
+export const pipeWorks = ["restored", "revoiced", "relocated", "rescaled"] as const;
+/**
+ * What a survey found in an existing rank; each finding adds its own restoration norm. No finding
+ * means the rank is sound. Reed findings apply to the reed pipes' blocks, shallots and tongues.
+ */
+export const findings = [
+  "feet-collapsing", "split-seams", "mouths-damaged", "tops-torn", "wood-split", "woodworm", "tongues-worn", "resonators-damaged",
 ] as const;
+/** A reed resonator's length as a fraction of full (half-wave) length: short-length reeds run down to a sixteenth. */
+export const resonatorLengths = ["full", "half", "quarter", "eighth", "sixteenth"] as const;
+export const RESONATOR_FRACTION: Readonly<Record<(typeof resonatorLengths)[number], number>> = {
+  full: 1, half: 1 / 2, quarter: 1 / 4, eighth: 1 / 8, sixteenth: 1 / 16,
+};
 export const actions = ["mechanical", "electro-pneumatic", "electric", "pneumatic"] as const;
+/** Pitman and direct-electric chests valve every pipe on its own, so their ranks may be extended or borrowed (unit chests). */
 export const chestTypes = ["slider", "pitman", "direct-electric", "ventil"] as const;
+export const UNIT_CHESTS: readonly (typeof chestTypes)[number][] = ["pitman", "direct-electric"];
 /** Metals and woods the rate tables price; ids are the file format's words. */
 export const materials = ["high-tin", "spotted", "common", "zinc", "copper", "pine", "oak", "mahogany"] as const;
+const workOnExisting = ["new", "restored", "retained"] as const;
 
 export const scaleSchema = z.object({
-  /** Semitones wider (+) or narrower (−) than the normal scale. */
-  offsetHt: z.number().min(-24).max(24).default(0),
+  /**
+   * Semitones wider (+) or narrower (−) than the normal scale, measured at the stop's own C
+   * (4′ C for a 4′ stop, the g of a 2⅔′), as practitioners read a deviation.
+   */
+  deviationHt: z.number().min(-48).max(48).default(0),
   /** The note on which the diameter halves, counted from 1 (normal scale: 17, i.e. every 16 semitones). */
   halvingOn: z.number().int().min(8).max(32).default(17),
-  /** Mouth width as a fraction of the circumference (normal: 1/4). */
+  /** Mouth width as a fraction of the circumference (normal: 1/4). Wooden pipes' mouths span their inside width. */
   mouthWidth: z.number().gt(0).lt(1).default(0.25),
+  /** Mouth height as a fraction of the mouth width; absent means the family's default from the firm's norms. */
+  cutUp: z.number().min(0.1).max(0.8).optional(),
 });
 
-/** One break range of a mixture: from this note upward, the footage of each rank. */
-export const mixtureBreakSchema = z.object({ from: noteName, footages: z.array(footageSchema).min(1).max(12) });
+/** One break range of a mixture: from this note upward, the footage of each rank; null where a rank is silent (progressive mixtures). */
+export const mixtureBreakSchema = z.object({ from: noteName, footages: z.array(footageSchema.nullable()).min(1).max(12) });
 
-export const stopSchema = z.object({
+export const resonatorSchema = z.object({
+  length: z.enum(resonatorLengths).default("full"),
+  /** Conical (trumpet, oboe) or cylindrical (clarinet, regal, vox humana). */
+  shape: z.enum(["conical", "cylindrical"]).default("conical"),
+});
+
+const stopFields = z.object({
   id: idSchema,
   name: z.string().min(1).max(80),
   footage: footageSchema,
@@ -63,15 +102,94 @@ export const stopSchema = z.object({
   family: z.enum(families),
   construction: z.enum(constructions).default("open"),
   material: z.enum(materials).default("spotted"),
-  scale: scaleSchema.default({ offsetHt: 0, halvingOn: 17, mouthWidth: 0.25 }),
+  scale: scaleSchema.prefault({}),
+  /** Reeds: the resonator's length and shape (full-length conical when absent). */
+  resonator: resonatorSchema.optional(),
+  /** Reeds: from this key upward the rank breaks to open flue pipes. */
+  fluesFrom: noteName.optional(),
+  /** The lowest pipes of another material (zinc or wooden basses under metal trebles). */
+  bass: z
+    .object({ notes: z.number().int().min(1).max(61), material: z.enum(materials), construction: z.enum(flueConstructions).optional() })
+    .optional(),
   /** A short compass of its own, e.g. from tenor c; otherwise the division's. */
   compass: compassSchema.optional(),
-  treatment: z.enum(treatments).default("new"),
-  /** For extension and borrowed: the id of the stop whose rank it draws on. */
+  origin: z.enum(origins).default("new"),
+  /** For an extension or a borrowed stop: the id of the stop whose rank it draws on. */
   source: idSchema.optional(),
+  /** Extensions: whether the notes they add to the rank are new pipes or pipes the organ already has. */
+  addedPipes: z.enum(["new", "existing"]).default("new"),
+  /** Work on existing pipes (an existing stop's, or an extension's existing added pipes). */
+  work: z.array(z.enum(pipeWorks)).max(pipeWorks.length).default([]),
+  /** Re-scaled: semitones the existing pipes move (+ up: wider, new basses; − down: narrower, new trebles). */
+  rescaleHt: z.number().int().min(-12).max(12).default(0),
+  /** Survey findings of an existing rank (restored work): each chooses its restoration norm. */
+  condition: z.array(z.enum(findings)).max(findings.length).default([]),
+  /** The rank's slider chest is duplexed, so the rank also plays from a second keyboard. */
+  duplex: z.boolean().default(false),
   /** The lowest N pipes stand on an offset chest, off the main chest. */
   offsetBassPipes: z.number().int().min(0).max(32).default(0),
 });
+
+// ── reading the first format ─────────────────────────────────────────────────────────────────
+
+const LEGACY_TREATMENT: Readonly<Record<string, { origin: (typeof origins)[number]; work: (typeof pipeWorks)[number][] }>> = {
+  new: { origin: "new", work: [] },
+  retained: { origin: "existing", work: [] },
+  restored: { origin: "existing", work: ["restored"] },
+  revoiced: { origin: "existing", work: ["revoiced"] },
+  relocated: { origin: "existing", work: ["relocated"] },
+  extension: { origin: "extension", work: [] },
+  borrowed: { origin: "borrowed", work: [] },
+  prepared: { origin: "prepared", work: [] },
+  removed: { origin: "removed", work: [] },
+};
+
+const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
+
+/**
+ * The deviation at the stop's own C that gives the same pipes as a first-format offset measured at
+ * 8′ C: with D = D_normal(s_ref − dev) · 2^(−(s − s_ref)/(H − 1)) against D = 155.5 · 2^(−(s − off)/(H − 1)),
+ * dev = s_ref + 16 · (off − s_ref)/(H − 1) (derived; equal to off on the normal halving, H = 17).
+ * Rounded to a hundredth of a semitone (diameters move by less than 0.03 %).
+ */
+export function deviationFromLegacyOffset(offsetAt8ftC: number, halvingOn: number, referenceSemitones: number): number {
+  const dev = referenceSemitones + (16 * (offsetAt8ftC - referenceSemitones)) / (halvingOn - 1);
+  return Math.round(dev * 100) / 100;
+}
+
+/**
+ * A stop of the first format in this one; anything else passes through untouched. Never throws:
+ * what it cannot read is left for zod to report.
+ */
+export function upgradeStop(raw: unknown): unknown {
+  if (!isRecord(raw)) return raw;
+  let s: Record<string, unknown> = raw;
+  if ("treatment" in s && s.origin === undefined) {
+    const { treatment, ...rest } = s;
+    const t = typeof treatment === "string" ? LEGACY_TREATMENT[treatment] : undefined;
+    s = t ? { ...rest, origin: t.origin, work: t.work } : { ...rest, origin: treatment };
+  }
+  if (s.construction === "reed-full") s = { ...s, construction: "reed", resonator: isRecord(s.resonator) ? s.resonator : { length: "full", shape: "conical" } };
+  else if (s.construction === "reed-half") s = { ...s, construction: "reed", resonator: isRecord(s.resonator) ? s.resonator : { length: "half", shape: "cylindrical" } };
+  const scale = s.scale;
+  if (isRecord(scale) && scale.offsetHt !== undefined && scale.deviationHt === undefined) {
+    const { offsetHt, ...rest } = scale;
+    const halving = typeof rest.halvingOn === "number" && rest.halvingOn > 1 ? rest.halvingOn : 17;
+    // Long text is left for zod's length check: it never reaches the footage parser.
+    const f = (typeof s.footage === "string" && s.footage.length <= MAX_FOOTAGE_TEXT) || typeof s.footage === "number" ? parseFootage(s.footage) : null;
+    const converted = typeof offsetHt === "number" && f ? deviationFromLegacyOffset(offsetHt, halving, semitonesAbove8ft(f)) : offsetHt;
+    s = { ...s, scale: { ...rest, deviationHt: converted } };
+  }
+  return s;
+}
+
+/**
+ * A stop, in this format; stops of the first format are upgraded on the way in. The type is the
+ * current format's: old input is accepted at run time, new code writes new stops.
+ */
+export const stopSchema = z.preprocess(upgradeStop, stopFields) as unknown as typeof stopFields;
+/** The stop's fields without the upgrade step, for forms that only ever hold the current format. */
+export const stopFormSchema = stopFields;
 
 export const windPressureSchema = z.object({ value: z.number().positive(), unit: z.enum(["mm", "in"]).default("mm") });
 
@@ -86,13 +204,15 @@ export const divisionSchema = z.object({
   chestLayout: z.enum(["chromatic", "c-c-sharp"]).default("c-c-sharp"),
   windPressure: windPressureSchema.default({ value: 80, unit: "mm" }),
   enclosed: z.boolean().default(false),
+  /** Inside size of the swell box in mm; absent means sized from the chest and its tallest pipe. */
+  swellBox: z.object({ widthMm: z.number().positive(), depthMm: z.number().positive(), heightMm: z.number().positive() }).optional(),
   /** Cable run from the console to this division's chests, in metres. */
   consoleDistanceM: z.number().min(0).max(500).default(10),
   /** Chest space available in the case, in mm; absent means not yet known. */
   space: z.object({ lengthMm: z.number().positive(), depthMm: z.number().positive() }).optional(),
   passageBoard: z.boolean().default(true),
   /** What happens to the windchests and action: made new, restored, or kept as they are. */
-  chestWork: z.enum(["new", "restored", "retained"]).default("new"),
+  chestWork: z.enum(workOnExisting).default("new"),
   // Limits far above any organ, so a runaway file cannot tie up the server.
   stops: z.array(stopSchema).max(250).default([]),
 });
@@ -108,7 +228,7 @@ export const couplerSchema = z.object({
 
 export const accessoriesSchema = z.object({
   /** What happens to the console: made new, restored, or kept as it is. */
-  consoleWork: z.enum(["new", "restored", "retained"]).default("new"),
+  consoleWork: z.enum(workOnExisting).default("new"),
   couplers: z.array(couplerSchema).max(128).default([]),
   tremulants: z.array(z.object({ id: idSchema, division: idSchema })).max(32).default([]),
   combination: z
@@ -117,7 +237,47 @@ export const accessoriesSchema = z.object({
       generalPistons: z.number().int().min(0).max(100).default(0),
       divisionalPistons: z.number().int().min(0).max(20).default(0),
     })
-    .default({ memoryLevels: 0, generalPistons: 0, divisionalPistons: 0 }),
+    .prefault({}),
+});
+
+/** The case and its front: casework, display and dummy pipes, decoration and gilding as quantities. */
+export const caseSchema = z.object({
+  /** "none": the organ stands without a case of its own (a chamber), or the case is not part of the work. */
+  work: z.enum(["new", "restored", "retained", "none"]).default("none"),
+  /** Outside size in mm; absent means sized round the chests and the tallest pipe. */
+  widthMm: z.number().positive().max(40000).optional(),
+  depthMm: z.number().positive().max(20000).optional(),
+  heightMm: z.number().positive().max(40000).optional(),
+  timber: z.enum(["pine", "oak", "mahogany"]).default("oak"),
+  /** Speaking pipes standing in the front (counted in their stops), to be polished as display pipes. */
+  speakingFrontPipes: z.number().int().min(0).max(1000).default(0),
+  /** Dummy (non-speaking) display pipes, made new, of this average length in mm. */
+  dummyPipes: z.number().int().min(0).max(1000).default(0),
+  dummyPipeLengthMm: z.number().min(100).max(11000).default(1500),
+  frontMetal: z.enum(["high-tin", "spotted", "common", "zinc", "copper"]).default("high-tin"),
+  /** Carved or pierced decoration (pipe shades, cresting), m². */
+  decorationM2: z.number().min(0).max(500).default(0),
+  /** Gilding (pipe mouths, carving, mouldings), m². */
+  gildingM2: z.number().min(0).max(500).default(0),
+});
+
+/** The wind system: blower, reservoirs per pressure, trunking; tremulants come from the accessories. */
+export const windSchema = z.object({
+  work: z.enum(workOnExisting).default("new"),
+  /** A new blower, or the existing one kept. */
+  blower: z.enum(["new", "retained"]).default("new"),
+  /** Length of main wind trunk from the blower to the reservoirs and chests, m; absent means sized per division. */
+  trunkLengthM: z.number().min(0).max(500).optional(),
+});
+
+/** The site: how far away, whether scaffolding and lodging are needed. */
+export const siteSchema = z.object({
+  /** Road distance from the workshop, km. */
+  distanceKm: z.number().min(0).max(20000).default(50),
+  /** Scaffolding or a tower for access inside and in front of the case. */
+  scaffold: z.boolean().default(true),
+  /** Crew lodge near the site; absent means when the site lies beyond the firm's daily-travel distance. */
+  lodging: z.boolean().optional(),
 });
 
 const isoDate = z.iso.date("a date as yyyy-mm-dd");
@@ -133,14 +293,12 @@ export const tuningSchema = z.object({
 
 export const schemeSchema = z.object({
   name: z.string().min(1).max(120),
-  tuning: tuningSchema.default({ pitchHz: 440, temperatureC: 18, mutations: "tempered" }),
+  tuning: tuningSchema.prefault({}),
   divisions: z.array(divisionSchema).min(1).max(16),
-  accessories: accessoriesSchema.default({
-    consoleWork: "new",
-    couplers: [],
-    tremulants: [],
-    combination: { memoryLevels: 0, generalPistons: 0, divisionalPistons: 0 },
-  }),
+  accessories: accessoriesSchema.prefault({}),
+  case: caseSchema.prefault({}),
+  wind: windSchema.prefault({}),
+  site: siteSchema.prefault({}),
   /** Dates for the programme (ISO yyyy-mm-dd): work starts, and the client's target for completion. */
   programme: z.object({ start: isoDate, target: isoDate.optional() }).optional(),
 });
@@ -149,8 +307,23 @@ export type SchemeInput = z.input<typeof schemeSchema>;
 export type Scheme = Readonly<z.output<typeof schemeSchema>>;
 export type Division = Scheme["divisions"][number];
 export type Stop = Division["stops"][number];
-export type Treatment = (typeof treatments)[number];
+export type Origin = (typeof origins)[number];
+export type PipeWork = (typeof pipeWorks)[number];
+export type Finding = (typeof findings)[number];
 export type Material = (typeof materials)[number];
 export type Construction = (typeof constructions)[number];
+export type FlueConstruction = (typeof flueConstructions)[number];
 export type Family = (typeof families)[number];
 export type Coupler = Scheme["accessories"]["couplers"][number];
+export type CaseWork = Scheme["case"];
+export type WindWork = Scheme["wind"];
+export type SiteWork = Scheme["site"];
+
+/**
+ * One word for what happens to a stop, as a stop list or a report column gives it: its origin, or
+ * for existing pipes the work on them ("restored+revoiced"; "retained" when kept as they are).
+ */
+export function dispositionOf(stop: { readonly origin: Origin; readonly work: readonly PipeWork[] }): string {
+  if (stop.origin !== "existing") return stop.origin;
+  return stop.work.length ? [...stop.work].sort((a, b) => pipeWorks.indexOf(a) - pipeWorks.indexOf(b)).join("+") : "retained";
+}

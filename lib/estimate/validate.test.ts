@@ -27,7 +27,8 @@ describe("parseScheme", () => {
     expect(r.ok).toBe(true);
     if (r.ok) {
       expect(r.scheme.tuning.pitchHz).toBe(440);
-      expect(r.scheme.divisions[0].stops[0].treatment).toBe("new");
+      expect(r.scheme.divisions[0].stops[0].origin).toBe("new");
+      expect(r.scheme.divisions[0].stops[0].work).toEqual([]);
     }
   });
 

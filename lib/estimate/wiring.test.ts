@@ -42,14 +42,14 @@ describe("a large four-manual electric-action organ", () => {
   function fourManual(): Scheme {
     const flue = ["16", "8", "8", "8", "8", "4", "4", "2 2/3", "2", "1 3/5", "1 1/3", "1", "8", "4"];
     const mix = (id: string) => stop(id, "2", { family: "mixture", ranks: 4, breaks: [{ from: "C", footages: ["2", "1 1/3", "1", "2/3"] }, { from: "c'", footages: ["4", "2 2/3", "2", "1 1/3"] }] });
-    const reeds = (p: string) => ["16", "8"].map((f, i) => stop(`${p}r${i}`, f, { family: "reed", construction: "reed-full" }));
+    const reeds = (p: string) => ["16", "8"].map((f, i) => stop(`${p}r${i}`, f, { family: "reed", construction: "reed" }));
     const division = (id: string, distance: number) =>
       manual(id, [...flue.map((f, i) => stop(`${id}${i}`, f)), mix(`${id}mx`), ...reeds(id)], { action: "electric", chest: "direct-electric", consoleDistanceM: distance });
     const ped = pedal("pd", [
       stop("pd32", 32, { family: "flute", material: "pine" }), stop("pd16", 16), stop("pd16b", 16, { family: "flute", construction: "stopped" }),
-      stop("pd8", 8, { treatment: "extension", source: "pd16" }), stop("pd4", 4, { treatment: "extension", source: "pd8" }),
-      stop("pd16r", 16, { family: "reed", construction: "reed-full" }), stop("pd8r", 8, { treatment: "extension", source: "pd16r" }),
-      stop("pdb", 16, { treatment: "borrowed", source: "swr0" }), mix("pdmx"),
+      stop("pd8", 8, { origin: "extension", source: "pd16" }), stop("pd4", 4, { origin: "extension", source: "pd8" }),
+      stop("pd16r", 16, { family: "reed", construction: "reed" }), stop("pd8r", 8, { origin: "extension", source: "pd16r" }),
+      stop("pdb", 16, { origin: "borrowed", source: "swr0" }), mix("pdmx"),
     ], { action: "electric", chest: "direct-electric", consoleDistanceM: 20 });
     return scheme([division("ch", 15), division("gt", 18), division("sw", 20), division("so", 25), ped], {
       accessories: {
@@ -71,7 +71,13 @@ describe("a large four-manual electric-action organ", () => {
 
   it("needs far less with mechanical action", () => {
     const s = fourManual();
-    const mech = { ...s, divisions: s.divisions.map((d) => (d.keyboard === "manual" ? { ...d, action: "mechanical" as const, chest: "slider" as const } : d)) };
+    // On slider chests the Swell reed the Pedal borrows must be duplexed.
+    const mech = {
+      ...s,
+      divisions: s.divisions.map((d) =>
+        d.keyboard === "manual" ? { ...d, action: "mechanical" as const, chest: "slider" as const, stops: d.stops.map((st) => (st.id === "swr0" ? { ...st, duplex: true } : st)) } : d,
+      ),
+    };
     expect(estimateScheme(mech, DEFAULT_RATES).totals.wiring.conductorLengthKm).toBeLessThan(estimateScheme(s, DEFAULT_RATES).totals.wiring.conductorLengthKm / 3);
   });
 });

@@ -4,8 +4,11 @@
  * relay standing in the organ). Length is Σ conductors × their run. Per-pipe magnets are why large
  * instruments reach kilometres: a large four-manual electric organ has about ten miles (≈16 km) of
  * cable — common practice, no source. Mechanical and pneumatic divisions need none of this.
+ * Electrics hours: a termination per conductor, per stop, per division; the relay bought in.
  */
 import type { Rates } from "./rates";
+import { D } from "./departments";
+import { ITEM, MATERIAL_LINE, type CostCentre } from "./cost-centres";
 
 type WiringNorms = Rates["wiring"];
 
@@ -73,4 +76,19 @@ export function consoleWiring(c: ConsoleWiringInput, n: WiringNorms): Wiring {
   if (!c.electric) return NONE;
   const conductors = c.couplerKeys + c.stopControls + c.pistons;
   return { conductors, conductorLengthM: Math.round(conductors * n.consoleInternalM) };
+}
+
+/** Books a division's (or the console's) electrics: terminations, per stop, per division, and the cable. */
+export function bookElectrics(w: Wiring, stops: number, perDivision: boolean, rates: Rates, centre: CostCentre): void {
+  if (w.conductors === 0) return;
+  const n = rates.norms;
+  centre.hours[D.electrics] += w.conductors * n.electricsPerConductor + stops * n.electricsPerStop + (perDivision ? n.electricsPerDivision : 0);
+  centre.materials[MATERIAL_LINE.cable] += w.conductorLengthM;
+}
+
+/** The relay, bought in: a fixed part and a price per conductor it switches. */
+export function bookRelay(conductors: number, centre: CostCentre): void {
+  if (conductors === 0) return;
+  centre.items[ITEM.relayBase] += 1;
+  centre.items[ITEM.relayPerConductor] += conductors;
 }

@@ -1,11 +1,12 @@
 /**
  * The scheme document the editor edits and the API saves: the estimator's scheme model
  * (lib/estimate/scheme.ts) without the tuning, which belongs to the project, plus a description.
+ * Stops of the first format (a `treatment` word) are read through the scheme model's upgrade.
  * Pure: shared by the browser (forms, live figures) and the server (validation before saving).
  */
 import { z } from "zod";
 import "@/lib/validation/messages";
-import { accessoriesSchema, divisionSchema, type SchemeInput } from "@/lib/estimate/scheme";
+import { accessoriesSchema, caseSchema, divisionSchema, siteSchema, windSchema, type SchemeInput } from "@/lib/estimate/scheme";
 
 export const schemeStatuses = ["draft", "proposed", "preferred", "accepted", "withdrawn"] as const;
 export type SchemeStatus = (typeof schemeStatuses)[number];
@@ -15,6 +16,10 @@ export const schemeDocumentSchema = z.object({
   description: z.string().max(4000, "Keep the description under 4000 characters.").default(""),
   divisions: z.array(divisionSchema).max(16, "At most 16 divisions.").default([]),
   accessories: accessoriesSchema.prefault({}),
+  /** The case and its front, the wind system and the site: the organ's work beyond its divisions. */
+  case: caseSchema.prefault({}),
+  wind: windSchema.prefault({}),
+  site: siteSchema.prefault({}),
 });
 export type SchemeDocumentInput = z.input<typeof schemeDocumentSchema>;
 export type SchemeDocument = z.output<typeof schemeDocumentSchema>;
@@ -57,6 +62,9 @@ export function toEstimatorScheme(doc: SchemeDocument, tuning: Tuning): SchemeIn
     tuning: { pitchHz: tuning.pitchHz, temperatureC: tuning.temperatureC, mutations: "tempered" },
     divisions: doc.divisions,
     accessories: doc.accessories,
+    case: doc.case,
+    wind: doc.wind,
+    site: doc.site,
   };
 }
 

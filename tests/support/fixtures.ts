@@ -23,9 +23,12 @@ export function smallDocument(name = "Scheme A"): SchemeDocumentInput {
         name: "Pedal",
         keyboard: "pedal",
         compass: { low: "C", high: "g'" },
+        // An extended rank needs a unit chest.
+        action: "electro-pneumatic",
+        chest: "pitman",
         stops: [
           { id: "ped-bd", name: "Bourdon", footage: "16", family: "flute", construction: "stopped", material: "pine" },
-          { id: "ped-bass", name: "Bass Flute", footage: "8", family: "flute", construction: "stopped", material: "pine", treatment: "extension", source: "ped-bd" },
+          { id: "ped-bass", name: "Bass Flute", footage: "8", family: "flute", construction: "stopped", material: "pine", origin: "extension", source: "ped-bd" },
         ],
       },
     ],

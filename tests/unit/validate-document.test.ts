@@ -6,7 +6,7 @@ describe("checkDocument", () => {
   it("accepts a sound document and fills in the scheme model's defaults", () => {
     const res = checkDocument(smallDocument());
     expect(res.ok).toBe(true);
-    if (res.ok) expect(res.document.divisions[0]!.stops[0]).toMatchObject({ ranks: 1, treatment: "new", material: "spotted" });
+    if (res.ok) expect(res.document.divisions[0]!.stops[0]).toMatchObject({ ranks: 1, origin: "new", work: [], material: "spotted" });
   });
 
   it("accepts an empty document: a scheme starts with no divisions", () => {
@@ -38,5 +38,19 @@ describe("checkDocument", () => {
     const res = checkDocument(doc);
     expect(res.ok).toBe(false);
     if (!res.ok) expect(res.fields["divisions.0.stops.0.ranks"]![0]).toMatch(/^Division "Great", stop "Open Diapason": ranks: /);
+  });
+});
+
+describe("documents saved in the first format", () => {
+  it("read their stops' treatments as where the pipes come from and the work on them", () => {
+    const doc = smallDocument();
+    (doc.divisions![0]!.stops![0] as Record<string, unknown>).treatment = "relocated";
+    (doc.divisions![1]!.stops![1] as Record<string, unknown>) = { ...doc.divisions![1]!.stops![1]!, origin: undefined, treatment: "extension" };
+    const res = checkDocument(doc);
+    expect(res.ok).toBe(true);
+    if (!res.ok) return;
+    expect(res.document.divisions[0]!.stops[0]).toMatchObject({ origin: "existing", work: ["relocated"] });
+    expect(res.document.divisions[0]!.stops[0]).not.toHaveProperty("treatment");
+    expect(res.document.divisions[1]!.stops[1]).toMatchObject({ origin: "extension", source: "ped-bd" });
   });
 });

@@ -1,0 +1,106 @@
+/**
+ * Pipe work of one stop: making new pipes, and for existing pipes the work the scheme gives —
+ * kept as they are (cleaned), restored (by the survey's findings), revoiced (flue or reed),
+ * relocated, re-scaled — with the material bought: new metal with its casting and offcut
+ * allowance, new timber with its sawing allowance, and metal to repair restored pipes.
+ * Existing metal and timber are not bought (their weight still counts for loads).
+ */
+import type { Finding, PipeWork } from "./scheme";
+import type { Norms, Rates } from "./rates";
+import { D } from "./departments";
+import { dotBySize, sumBySize } from "./labour";
+import { ALL_MATERIALS } from "./materials";
+import { BODY_STRIDE, KINDS, MATERIAL_COUNT, MATERIAL_STRIDE, METAL_FLUE, METAL_REED, PITCH_STRIDE, WOOD_FLUE, WOOD_REED } from "./pipe-aggregates";
+import { MATERIAL_LINE, type CostCentre } from "./cost-centres";
+
+/** Which findings apply to which part: metal bodies and resonators, wooden pipes and resonators, reed parts. */
+const METAL_FINDINGS: readonly Finding[] = ["feet-collapsing", "split-seams", "mouths-damaged", "tops-torn"];
+const METAL_RESONATOR_FINDINGS: readonly Finding[] = ["split-seams", "tops-torn", "resonators-damaged"];
+const WOOD_FINDINGS: readonly Finding[] = ["wood-split", "woodworm"];
+const WOOD_RESONATOR_FINDINGS: readonly Finding[] = ["wood-split", "woodworm", "resonators-damaged"];
+const REED_PART_FINDINGS: readonly Finding[] = ["tongues-worn"];
+const FINDINGS_BY_KIND = [METAL_FINDINGS, WOOD_FINDINGS, METAL_RESONATOR_FINDINGS, WOOD_RESONATOR_FINDINGS];
+
+export interface StopPipeWork {
+  readonly stop: number;
+  readonly work: readonly PipeWork[];
+  readonly condition: readonly Finding[];
+}
+
+/**
+ * Books one stop's pipe hours into `pipes` (making, restoring, voicing) and `installation`
+ * (relocating), and its bought metal and timber into `pipes`. Returns the hours booked.
+ */
+export function bookPipeWork(
+  s: StopPipeWork, bodyCounts: Float64Array, pitchCounts: Float64Array, finished: Float64Array,
+  rates: Rates, pipes: CostCentre, installation: CostCentre,
+): number {
+  const n = rates.norms;
+  let booked = 0;
+  const add = (centre: CostCentre, dep: number, hours: number) => {
+    if (hours === 0) return;
+    centre.hours[dep] += hours;
+    booked += hours;
+  };
+  const shopOf = (kind: number) => (kind === WOOD_FLUE || kind === WOOD_REED ? D.woodPipes : D.metalPipes);
+
+  // New pipes: the body or resonator by its size, reed parts and voicing by pitch.
+  const newBody = s.stop * BODY_STRIDE;
+  for (let kind = 0; kind < KINDS; kind++) {
+    const at = newBody + kind * 5;
+    if (sumBySize(bodyCounts, at) === 0) continue;
+    const norm = kind === METAL_FLUE ? n.newMetalPipe : kind === METAL_REED ? n.reedResonator : n.newWoodPipe;
+    add(pipes, shopOf(kind), dotBySize(bodyCounts, at, norm));
+  }
+  const newPitch = s.stop * PITCH_STRIDE;
+  add(pipes, D.voicing, dotBySize(pitchCounts, newPitch, n.voiceNewFluePipe));
+  add(pipes, D.reeds, dotBySize(pitchCounts, newPitch + 5, n.reedParts));
+  add(pipes, D.voicing, dotBySize(pitchCounts, newPitch + 5, n.voiceNewReedPipe));
+
+  // Existing pipes: the work on them.
+  const oldBody = s.stop * BODY_STRIDE + KINDS * 5;
+  const oldPitch = s.stop * PITCH_STRIDE + 10;
+  const flues = sumBySize(pitchCounts, oldPitch);
+  const reeds = sumBySize(pitchCounts, oldPitch + 5);
+  if (flues + reeds > 0) {
+    const restored = s.work.includes("restored");
+    for (let kind = 0; kind < KINDS; kind++) {
+      const at = oldBody + kind * 5;
+      if (sumBySize(bodyCounts, at) === 0) continue;
+      const wood = kind === WOOD_FLUE || kind === WOOD_REED;
+      if (restored) {
+        add(pipes, shopOf(kind), dotBySize(bodyCounts, at, wood ? n.restoreWoodPipe : n.restoreMetalPipe));
+        for (const f of s.condition) if (FINDINGS_BY_KIND[kind].includes(f)) add(pipes, shopOf(kind), dotBySize(bodyCounts, at, n.finding[f]));
+      } else {
+        add(pipes, shopOf(kind), dotBySize(bodyCounts, at, n.cleanPipe));
+      }
+      if (s.work.includes("rescaled")) add(pipes, shopOf(kind), dotBySize(bodyCounts, at, n.rescalePipe));
+    }
+    if (restored) {
+      add(pipes, D.reeds, dotBySize(pitchCounts, oldPitch + 5, n.restoreReedParts));
+      for (const f of s.condition) if (REED_PART_FINDINGS.includes(f)) add(pipes, D.reeds, dotBySize(pitchCounts, oldPitch + 5, n.finding[f]));
+      add(pipes, D.voicing, (flues + reeds) * n.regulateRestoredPipe);
+    }
+    if (s.work.includes("revoiced")) add(pipes, D.voicing, flues * n.revoiceFluePipe + reeds * n.revoiceReedPipe);
+    if (s.work.includes("relocated")) add(installation, D.erection, (flues + reeds) * n.relocatePipe);
+  }
+
+  // Material bought: new metal and timber with their allowances; a share of restored pipes' metal for repairs.
+  const restoredShare = s.work.includes("restored") ? rates.pipeMetal.repairPercent / 100 : 0;
+  for (let m = 0; m < MATERIAL_COUNT; m++) {
+    const material = ALL_MATERIALS[m];
+    const fresh = finished[s.stop * MATERIAL_STRIDE + m];
+    const old = finished[s.stop * MATERIAL_STRIDE + MATERIAL_COUNT + m];
+    if (fresh === 0 && old === 0) continue;
+    const wood = m >= 5;
+    const allowance = wood ? rates.woodPipes.allowancePercent : rates.pipeMetal.allowancePercent[material as "spotted"];
+    const bought = fresh * (1 + allowance / 100) + (wood ? 0 : old * restoredShare);
+    pipes.materials[MATERIAL_LINE[material]] += bought;
+  }
+  return booked;
+}
+
+/** Tonal finishing on site, per stop and per pipe. */
+export function finishingHours(w: { readonly fullStops: number; readonly existingStops: number; readonly derivedStops: number; readonly pipes: number }, n: Norms): number {
+  return w.fullStops * n.finishPerNewStop + w.existingStops * n.finishPerExistingStop + w.derivedStops * n.finishPerDerivedStop + w.pipes * n.finishPerPipe;
+}
