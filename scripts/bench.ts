@@ -15,6 +15,9 @@ import { DEFAULT_RATES } from "../lib/estimate/demo-rates";
 import { readFileSync } from "node:fs";
 import { cpus, loadavg } from "node:os";
 import { join } from "node:path";
+
+/** The examples, found from the working directory (the bench runs bundled, away from its source). */
+const EXAMPLES = join(process.cwd(), "examples");
 import { estimateScheme, formGeometry, parseSchemeFile, planScheme, speedOfSoundMPerS, type Rates, type Scheme, type SchemePlan } from "@/lib/estimate";
 
 /** The geometry constants of a segment's pipes. */
@@ -24,7 +27,7 @@ function geometryOf(plan: SchemePlan, form: number, rates: Rates) {
 }
 
 function load(file: string): { scheme: Scheme; rates: Rates } {
-  const r = parseSchemeFile(readFileSync(join(__dirname, "..", "examples", file), "utf8"), DEFAULT_RATES);
+  const r = parseSchemeFile(readFileSync(join(EXAMPLES, file), "utf8"), DEFAULT_RATES);
   if (!r.ok) throw new Error(`${file}: ${r.messages.join("; ")}`);
   return { scheme: r.scheme, rates: r.rates };
 }

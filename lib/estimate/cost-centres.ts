@@ -41,11 +41,11 @@ export interface CostCentre {
   readonly division: string | null;
   readonly package: PackageId;
   /** Hours by department (departments.ts order). */
-  readonly hours: Float64Array;
+  readonly hours: number[];
   /** Quantities by material line: kg of metal bought, m³ of timber bought, m of conductor. */
-  readonly materials: Float64Array;
+  readonly materials: number[];
   /** Quantities of bought-in items and site costs, in each item's unit. */
-  readonly items: Float64Array;
+  readonly items: number[];
 }
 
 export function costCentre(division: string | null, pkg: PackageId): CostCentre {
@@ -53,9 +53,9 @@ export function costCentre(division: string | null, pkg: PackageId): CostCentre 
     id: `${division ?? "organ"}:${pkg}`,
     division,
     package: pkg,
-    hours: new Float64Array(DEPARTMENT_COUNT),
-    materials: new Float64Array(MATERIAL_LINE_COUNT),
-    items: new Float64Array(ITEM_COUNT),
+    hours: new Array<number>(DEPARTMENT_COUNT).fill(0),
+    materials: new Array<number>(MATERIAL_LINE_COUNT).fill(0),
+    items: new Array<number>(ITEM_COUNT).fill(0),
   };
 }
 

@@ -17,7 +17,7 @@ import { bookElectrics, divisionWiring, isElectricAction, type KeyFeed, type Wir
 import { bookInstallation } from "./installation";
 import { costCentre, type CostCentre } from "./cost-centres";
 import { D } from "./departments";
-import { ALL_MATERIALS, containsLead, isWood, type Metal, type Wood } from "./materials";
+import { ALL_MATERIALS, containsLead, isWood, MATERIAL_INDEX, type Metal, type Wood } from "./materials";
 import { midiToNote } from "./notes";
 import { mmWaterToPa, windPressureMm } from "./units";
 
@@ -156,8 +156,8 @@ export function divisionWork(scheme: Scheme, plan: SchemePlan, agg: PipeAggregat
     const swellC = costCentre(id, "swellBoxes");
     const electricsC = costCentre(id, "electrics");
     const installC = costCentre(id, "installation");
-    const metalKg = recordOf(METALS, () => 0);
-    const woodM3 = recordOf(WOODS, () => 0);
+    // By material index (materials.ts ALL_MATERIALS): metals kg, woods m³.
+    const byMaterial = new Array<number>(MATERIAL_COUNT).fill(0);
     const stops: StopEstimate[] = [];
     let pipes: PipeCounts = NO_PIPES;
     let stopControls = 0;
@@ -177,11 +177,10 @@ export function divisionWork(scheme: Scheme, plan: SchemePlan, agg: PipeAggregat
       let metalBought = 0;
       let woodBought = 0;
       if (sp.kind === "own" || sp.kind === "extension") {
-        const before = sumMaterials(pipesC);
-        hours = bookPipeWork({ stop: si, work: sp.work, condition: stop.condition }, agg.bodyCounts, agg.pitchCounts, agg.materials, rates, pipesC, installC);
-        const after = sumMaterials(pipesC);
-        metalBought = after.metal - before.metal;
-        woodBought = after.wood - before.wood;
+        const booked = bookPipeWork({ stop: si, work: sp.work, condition: stop.condition }, agg.bodyCounts, agg.pitchCounts, agg.materials, rates, pipesC, installC);
+        hours = booked.hours;
+        metalBought = booked.metalBoughtKg;
+        woodBought = booked.woodBoughtM3;
       }
       let kg = 0;
       let m3 = 0;
@@ -189,12 +188,10 @@ export function divisionWork(scheme: Scheme, plan: SchemePlan, agg: PipeAggregat
         const v = agg.materials[si * MATERIAL_STRIDE + m] + agg.materials[si * MATERIAL_STRIDE + MATERIAL_COUNT + m];
         if (v === 0) continue;
         const material = ALL_MATERIALS[m];
-        if (isWood(material)) {
-          m3 += v;
-          woodM3[material] += v;
-        } else {
+        byMaterial[m] += v;
+        if (isWood(material)) m3 += v;
+        else {
           kg += v;
-          metalKg[material] += v;
           if (containsLead(rates.alloys[material])) leadBearing = true;
         }
         // Existing pipes go to the workshop and back: their weight is carried, their material not bought.
@@ -281,8 +278,9 @@ export function divisionWork(scheme: Scheme, plan: SchemePlan, agg: PipeAggregat
     stopControlsTotal += stopControls;
     pipesTotal = addCounts(pipesTotal, pipes);
     const windMm = windPressureMm(division.windPressure);
-    const woodRounded = recordOf(WOODS, (w) => r3(woodM3[w]));
-    const pipesKg = Object.values(metalKg).reduce((s, x) => s + x, 0) + WOODS.reduce((s, w) => s + woodM3[w] * rates.woodDensityKgM3[w], 0);
+    const metalKg = recordOf(METALS, (m) => byMaterial[MATERIAL_INDEX[m]]);
+    const woodRounded = recordOf(WOODS, (w) => r3(byMaterial[MATERIAL_INDEX[w]]));
+    const pipesKg = METALS.reduce((s, m) => s + metalKg[m], 0) + WOODS.reduce((s, w) => s + byMaterial[MATERIAL_INDEX[w]] * rates.woodDensityKgM3[w], 0);
     const chestArea = (main.lengthMm * main.depthMm + (offset ? offset.lengthMm * offset.depthMm : 0)) / 1e6;
     const chestsKg = chestArea * rates.chest.kgPerM2;
     if (division.chestWork === "restored") existingKg += chestsKg;
@@ -303,12 +301,4 @@ export function divisionWork(scheme: Scheme, plan: SchemePlan, agg: PipeAggregat
     divisions, centres, stopControls: stopControlsTotal, ranks: ranksTotal, pipes: pipesTotal, anyElectric, anyExisting, leadBearing,
     electricStopAction: electricStopActionAny,
   };
-}
-
-function sumMaterials(c: CostCentre): { metal: number; wood: number } {
-  let metal = 0;
-  let wood = 0;
-  for (let m = 0; m < 5; m++) metal += c.materials[m];
-  for (let m = 5; m < 8; m++) wood += c.materials[m];
-  return { metal, wood };
 }

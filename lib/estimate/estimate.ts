@@ -16,8 +16,8 @@ import { bookSiteTime, siteTimeOf, type SiteTime, type Transport, type Weights }
 import { bookManagement } from "./design";
 import { priceCentres, type Money } from "./money";
 import { centreHours, packageLabels, packages, type CostCentre, type PackageId } from "./cost-centres";
-import type { Department } from "./departments";
-import { hoursRecord, sumHours, totalHours } from "./labour";
+import { DEPARTMENT_COUNT, departments, type Department } from "./departments";
+import { sumHours, totalHours } from "./labour";
 import { metals, woods, type Metal, type Wood } from "./materials";
 import { cautionsFor, type Caution } from "./cautions";
 import type { WindNeed } from "./wind";
@@ -136,8 +136,13 @@ function recordOf<K extends string>(keys: readonly K[], f: (k: K) => number): Re
   return o;
 }
 
+/** Hours of some centres as shown: each centre's departments rounded to tenths, then summed exactly (in tenths). */
 function hoursOf(centres: readonly CostCentre[]): Record<Department, number> {
-  return sumHours(centres.map((c) => hoursRecord(c.hours)));
+  const tenths = new Array<number>(DEPARTMENT_COUNT).fill(0);
+  for (const c of centres) for (let d = 0; d < DEPARTMENT_COUNT; d++) tenths[d] += Math.round(c.hours[d] * 10);
+  const out = {} as Record<Department, number>;
+  for (let d = 0; d < DEPARTMENT_COUNT; d++) out[departments[d]] = tenths[d] / 10;
+  return out;
 }
 
 /**
@@ -161,8 +166,10 @@ export function estimateScheme(scheme: Scheme, rates: Rates, plan: SchemePlan = 
 
   const money = priceCentres(centres, rates);
   const costOf = new Map(money.byDivision.map((d) => [d.division, d.directCostAmount]));
+  const byDivision = new Map<string, CostCentre[]>();
+  for (const c of dw.centres) byDivision.set(c.division!, [...(byDivision.get(c.division!) ?? []), c]);
   const divisions: DivisionEstimate[] = dw.divisions.map((d: DivisionDraft, i) => {
-    const hours = hoursOf(dw.centres.filter((c) => c.division === d.id));
+    const hours = hoursOf(byDivision.get(d.id) ?? []);
     return {
       id: d.id, name: d.name, keyboard: d.keyboard, compass: d.compass, notes: d.notes, windPressureMm: d.windPressureMm, windPressurePa: d.windPressurePa,
       stops: d.stops, pipes: d.pipes, hours, hoursTotal: totalHours(hours), metalKg: d.metalKg, woodM3: d.woodM3, woodKg: d.woodKg,

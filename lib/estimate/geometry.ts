@@ -11,7 +11,7 @@ import { endCorrectionPerDiameter, resonatorOf, speakingLengthM, speedOfSoundMPe
 import { diameterMm, diameterRatioPerSemitone, mouthWidthMm, normalDiameterMm, SQUARE_SIDE_PER_DIAMETER } from "./scale";
 import {
   alloyDensityGCm3, bodyAreaFactor, boardThicknessMm, sheetAreaMm2, sheetMassKg, sheetThicknessMm, topSheetPerDiameterSq,
-  woodPartsPerSide, woodPipeVolumeM3, type Metal,
+  metals, woodPartsPerSide, woodPipeVolumeM3, type Metal,
 } from "./materials";
 import { formatFootage, frequencyHz, parseFootage, semitonesAbove8ft } from "./pitch";
 import { midiToNote } from "./notes";
@@ -50,6 +50,14 @@ export interface FormGeometry {
   readonly windPerMouth: number;
 }
 
+/** Alloy densities of the rates, g/cm³, worked out once per set of rates. */
+const densityMemo = new WeakMap<Rates["alloys"], Readonly<Record<Metal, number>>>();
+function densitiesOf(rates: Rates): Readonly<Record<Metal, number>> {
+  let d = densityMemo.get(rates.alloys);
+  if (!d) densityMemo.set(rates.alloys, (d = Object.fromEntries(metals.map((m) => [m, alloyDensityGCm3(rates.alloys[m])])) as Record<Metal, number>));
+  return d;
+}
+
 /** Constants of one form of a rank, with its owner stop's scale, under the firm's rates. */
 export function formGeometry(form: PipeForm, owner: Scheme["divisions"][number]["stops"][number], rates: Rates): FormGeometry {
   const resonator = resonatorOf(form.construction);
@@ -76,7 +84,7 @@ export function formGeometry(form: PipeForm, owner: Scheme["divisions"][number][
     mouthWidthFraction: owner.scale.mouthWidth,
     cutUp,
     thicknessFactor: metal ? rates.pipeMetal.thicknessFactor[form.material as Metal] : 0,
-    densityGCm3: metal ? alloyDensityGCm3(rates.alloys[form.material as Metal]) : 0,
+    densityGCm3: metal ? densitiesOf(rates)[form.material as Metal] : 0,
     solidPerA3: parts.solidPerA3,
     capHeightPerA: parts.capHeightPerA,
     windPerMouth: reed ? rates.wind.reedFlowFactor : 1,

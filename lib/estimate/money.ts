@@ -119,6 +119,28 @@ function centsText(c: bigint): string {
 /** x / d rounded half up, for x ≥ 0. */
 const divHalfUp = (x: bigint, d: bigint) => (x + d / 2n) / d;
 
+/** A price in ten-thousandths and as shown, to the cent (half up, as decimal.js's toFixed(2) gives it). */
+type Price = { readonly e4: bigint; readonly shown: string };
+const priceOfAmount = (amount: string): Price => {
+  const e4 = tenThousandths(amount);
+  return { e4, shown: centsText(divHalfUp(e4, 100n)) };
+};
+
+/** The rates' prices parsed once per set of rates (the editor prices every edit with the same rates). */
+const pricesMemo = new WeakMap<Rates, { hourly: Price[]; materials: Price[]; items: Price[] }>();
+function pricesOf(rates: Rates) {
+  let p = pricesMemo.get(rates);
+  if (!p) {
+    p = {
+      hourly: departments.map((d) => priceOfAmount(rates.hourlyRate[d])),
+      materials: materialLines.map((m) => priceOfAmount(priceOf(m, rates))),
+      items: itemKeys.map((k) => priceOfAmount(rates.items[k])),
+    };
+    pricesMemo.set(rates, p);
+  }
+  return p;
+}
+
 /** Quantity steps as shown: hours to 0.1 h, metal to 0.1 kg, timber to 0.001 m³, cable to 1 m, items to 0.01. */
 const HOUR_STEPS = 10;
 const ITEM_STEPS = 100;
@@ -150,11 +172,12 @@ export function roundHours(h: number): number {
 export function priceCentres(centres: readonly CostCentre[], rates: Rates): Money {
   const n = centres.length;
   const centreCents: bigint[] = new Array(n).fill(0n);
+  const prices = pricesOf(rates);
   const labour: LabourLine[] = [];
   let labourSum = 0n;
   for (let d = 0; d < DEPARTMENT_COUNT; d++) {
     const dep = departments[d];
-    const rate = tenThousandths(rates.hourlyRate[dep]);
+    const rate = prices.hourly[d].e4;
     let line = 0n;
     let tenths = 0;
     for (let i = 0; i < n; i++) {
@@ -167,14 +190,14 @@ export function priceCentres(centres: readonly CostCentre[], rates: Rates): Mone
     }
     if (tenths === 0) continue;
     labourSum += line;
-    labour.push({ department: dep, label: departmentLabels[dep], hours: tenths / 10, rateAmount: centsText(divHalfUp(rate, 100n)), amount: centsText(line) });
+    labour.push({ department: dep, label: departmentLabels[dep], hours: tenths / 10, rateAmount: prices.hourly[d].shown, amount: centsText(line) });
   }
   const materials: MaterialMoneyLine[] = [];
   let materialSum = 0n;
   for (let m = 0; m < MATERIAL_LINE_COUNT; m++) {
     const key = materialLines[m];
     const steps = materialSteps(key);
-    const price = tenThousandths(priceOf(key, rates));
+    const price = prices.materials[m].e4;
     const divisor = BigInt(steps) * 100n; // q/steps × price/10000 → cents
     let line = 0n;
     let q = 0;
@@ -190,14 +213,14 @@ export function priceCentres(centres: readonly CostCentre[], rates: Rates): Mone
     materialSum += line;
     materials.push({
       material: key, label: materialLineLabels[key], quantity: q / steps, unit: materialUnit(key),
-      priceAmount: new Dec(priceOf(key, rates)).toFixed(2), amount: centsText(line),
+      priceAmount: prices.materials[m].shown, amount: centsText(line),
     });
   }
   const items: ItemLine[] = [];
   let itemSum = 0n;
   for (let k = 0; k < ITEM_COUNT; k++) {
     const key = itemKeys[k];
-    const price = tenThousandths(rates.items[key]);
+    const price = prices.items[k].e4;
     let line = 0n;
     let q = 0;
     for (let i = 0; i < n; i++) {
@@ -210,7 +233,7 @@ export function priceCentres(centres: readonly CostCentre[], rates: Rates): Mone
     }
     if (q === 0) continue;
     itemSum += line;
-    items.push({ item: key, label: itemLabels[key].label, quantity: q / ITEM_STEPS, unit: itemLabels[key].unit, priceAmount: new Dec(rates.items[key]).toFixed(2), amount: centsText(line) });
+    items.push({ item: key, label: itemLabels[key].label, quantity: q / ITEM_STEPS, unit: itemLabels[key].unit, priceAmount: prices.items[k].shown, amount: centsText(line) });
   }
   const subtotal = labourSum + materialSum + itemSum;
   const overhead = percentOf(subtotal, rates.overheadPercent);

@@ -11,6 +11,17 @@ const NOTE_RE = /^(?:([A-G])\1{0,2}(#|b|♯|♭)?|([a-g])(#|b|♯|♭)?('{1,5}|�
 
 /** MIDI number of a Helmholtz note name, or null if the text is not one. "C" → 36, "c'" → 60, "CC" → 24. */
 export function noteToMidi(name: string): number | null {
+  // Note names repeat across a scheme and every edit parses them again: keep what was parsed (bounded).
+  const known = noteMemo.get(name);
+  if (known !== undefined) return known;
+  const midi = parseNote(name);
+  if (noteMemo.size < 1024) noteMemo.set(name, midi);
+  return midi;
+}
+
+const noteMemo = new Map<string, number | null>();
+
+function parseNote(name: string): number | null {
   const m = NOTE_RE.exec(name);
   if (!m) return null;
   let midi: number;
@@ -31,6 +42,10 @@ export function noteToMidi(name: string): number | null {
 
 /** Helmholtz name of a MIDI number, sharps spelt with "#": 36 → "C", 61 → "c#'", 24 → "CC". */
 export function midiToNote(midi: number): string {
+  return Number.isInteger(midi) && midi >= 0 && midi < 128 ? NOTE_NAMES[midi] : nameOf(midi);
+}
+
+function nameOf(midi: number): string {
   const pc = ((midi % 12) + 12) % 12;
   const octave = Math.floor(midi / 12) - 1; // scientific octave: C4 = 60
   const base = SHARP_NAMES[pc];
@@ -51,3 +66,6 @@ export function parseCompass(c: { readonly low: string; readonly high: string })
   const highMidi = noteToMidi(c.high);
   return lowMidi === null || highMidi === null ? null : { lowMidi, highMidi };
 }
+
+/** Names of MIDI 0–127, worked out once: the estimate names two notes per stop on every edit. */
+const NOTE_NAMES: readonly string[] = Array.from({ length: 128 }, (_, m) => nameOf(m));

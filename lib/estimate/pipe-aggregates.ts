@@ -61,6 +61,13 @@ export interface PipeAggregates {
 
 // Local copies: imported bindings can compile to property reads, which the per-pipe loop should not pay for.
 const SEMITONE = Math.pow(2, 1 / 12);
+const INV_SEMITONE = 1 / SEMITONE;
+/** 2^(k/12) for whole semitones k in −120 … 120 by table (tempered pitches), by pow otherwise (pure mutations). */
+const EXP2_TABLE = Float64Array.from({ length: 241 }, (_, i) => Math.pow(2, (i - 120) / 12));
+function exp2Semitones(k: number): number {
+  return Number.isInteger(k) && k >= -120 && k <= 120 ? EXP2_TABLE[k + 120] : Math.pow(2, k / 12);
+}
+const EXP2_33 = Math.pow(2, 33 / 12);
 const MIN_LF = MIN_LENGTH_FRACTION;
 const SQ_SIDE = SQUARE_SIDE_PER_DIAMETER;
 const PI = Math.PI;
@@ -121,78 +128,77 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
   const segments = plan.segments;
   const rowDivision = plan.rows.map((r) => r.division);
   const windExp = w.windwayExponent;
-  const air = w.airDensityKgM3;
-  const thickness8 = pm.thicknessAt8ftCMm;
-  const thicknessExp = pm.thicknessExponent;
-  const minSheet = pm.minimumThicknessMm;
-  const board8 = wp.boardAt8ftCMm;
-  const boardExp = wp.boardExponent;
-  const minBoard = wp.minimumBoardMm;
+  const jet = pressures.map((p) => jetSpeed(p, w.airDensityKgM3));
   const { maxLengthMm, maxDiameterMm, minFrequencyHz, maxFrequencyHz, windM3s, windPipes, positions, offsetPipes, tallestMm } = out;
+
+  // Per form, the values at its reference note and their logarithmic steps: a run of pipes then costs
+  // three exponentials to start, and a multiply per pipe for each quantity.
+  const runs = plan.forms.map((form, i) => {
+    const g = forms[i];
+    const dRef = D_8FT_C * Math.pow(2, -(g.referenceSemitones - g.deviationHt) / 16);
+    const lnRatio = Math.log(g.ratio);
+    const tExp = g.wood ? wp.boardExponent : pm.thicknessExponent;
+    const tRef = g.wood
+      ? wp.boardAt8ftCMm * Math.pow((dRef * SQ_SIDE) / REF_SIDE, wp.boardExponent)
+      : pm.thicknessAt8ftCMm * g.thicknessFactor * Math.pow(dRef / REF_DIAMETER, pm.thicknessExponent);
+    // Wind ∝ W^(1+e): a reed's by the mouth of a normal-width round pipe of its diameter.
+    const mouthPerD = g.wood && !form.reed ? SQ_SIDE : (form.reed ? 0.25 : g.mouthWidthFraction) * PI;
+    return {
+      g, dRef, lnRatio, tRef, tExp, tRatio: Math.pow(g.ratio, tExp), tMin: g.wood ? wp.minimumBoardMm : pm.minimumThicknessMm,
+      qRef: g.windPerMouth * flowPerPa * Math.pow(mouthPerD * dRef, 1 + windExp), qRatio: Math.pow(g.ratio, 1 + windExp),
+      kind: form.reed ? (g.wood ? WOOD_REED : METAL_REED) : g.wood ? WOOD_FLUE : METAL_FLUE,
+      material: MATERIAL_INDEX_[form.material], reed: form.reed,
+    };
+  });
 
   for (let sIndex = 0; sIndex < segments.length; sIndex++) {
     const seg = segments[sIndex];
-    const g = forms[seg.form];
-    const form = plan.forms[seg.form];
+    const run = runs[seg.form];
+    const g = run.g;
     const st = seg.stop;
     const row = seg.row;
     const div = rowDivision[row];
     const made = seg.status !== PREPARED_;
     const status = seg.status === EXISTING_ ? 1 : 0;
-    const reed = form.reed;
     const wood = g.wood;
-    const kind = reed ? (wood ? WOOD_REED : METAL_REED) : wood ? WOOD_FLUE : METAL_FLUE;
-    const bodyBase = st * BODY_STRIDE + status * KINDS * 5 + kind * 5;
-    const pitchBase = st * PITCH_STRIDE + status * 10 + (reed ? 5 : 0);
+    const bodyBase = st * BODY_STRIDE + status * KINDS * 5 + run.kind * 5;
+    const pitchBase = st * PITCH_STRIDE + status * 10 + (run.reed ? 5 : 0);
     const s0 = seg.fromKey - 36 + seg.shift;
-    let f = pitchHz * Math.pow(2, (s0 - 33) / 12); // MIDI 69 is 33 semitones above 8′ C
-    let d = D_8FT_C * Math.pow(2, -(g.referenceSemitones - g.deviationHt) / 16) * Math.pow(2, -(s0 - g.referenceSemitones) / (g.halvingOn - 1));
-    const cOverDiv = (1000 * c) / g.divisor;
-    const k = g.correctionPerDiameter;
+    const octaves = exp2Semitones(-s0); // 2^(−s0/12)
+    const f0 = pitchHz / (octaves * EXP2_33); // 440 · 2^((s0 − 33)/12): MIDI 69 is 33 semitones above 8′ C
+    const fromRef = s0 - g.referenceSemitones;
     const ratio = g.ratio;
+    let d = run.dRef * Math.exp(fromRef * run.lnRatio);
+    let t = run.tRef * Math.exp(fromRef * run.lnRatio * run.tExp);
+    let q = made ? run.qRef * Math.exp(fromRef * run.lnRatio * (1 + windExp)) * jet[div] : 0;
+    const tRatio = run.tRatio;
+    const tMin = run.tMin;
+    const qRatio = run.qRatio;
+    const k = g.correctionPerDiameter;
     const areaF = g.areaFactor;
     // The trade's size class goes by nominal length (8′ C open = 8 ft), not by the corrected speaking length.
-    const octaves = Math.pow(2, -s0 / 12);
     let body = FT8 * g.lengthFraction * octaves;
     let pitch = FT8 * octaves;
     let cls = classOf(body);
     let pcls = classOf(pitch);
-    // Sheet or board thickness follows the diameter (or inside width) by a power: one multiply per pipe.
-    let t: number;
-    let tRatio: number;
-    let tMin: number;
-    if (wood) {
-      t = board8 * Math.pow((d * SQ_SIDE) / REF_SIDE, boardExp);
-      tRatio = Math.pow(ratio, boardExp);
-      tMin = minBoard;
-    } else {
-      t = thickness8 * g.thicknessFactor * Math.pow(d / REF_DIAMETER, thicknessExp);
-      tRatio = Math.pow(ratio, thicknessExp);
-      tMin = minSheet;
-    }
-    // Wind ∝ W^(1+e): a geometric series along the run (a reed's by the mouth of a normal-width round pipe of its diameter).
-    const mouth0 = wood && !reed ? d * SQ_SIDE : (reed ? 0.25 : g.mouthWidthFraction) * PI * d;
-    const q0 = made ? g.windPerMouth * flowPerPa * Math.pow(mouth0, 1 + windExp) * jetSpeed(pressures[div], air) : 0;
-    const qRatio = Math.pow(ratio, 1 + windExp);
-    const n = seg.count;
-    const wind = q0 === 0 ? 0 : qRatio === 1 ? q0 * n : (q0 * (1 - Math.pow(qRatio, n))) / (1 - qRatio);
+    let nominal = (1000 * c) / g.divisor / f0; // c / (divisor · f) in mm
     const solid = g.solidPerA3;
     const capH = g.capHeightPerA;
     const top = g.topPerDSq;
+    const n = seg.count;
     const offN = seg.offsetCount;
-    let chanOdd = (seg.fromKey + seg.channelOffset) & 1;
+    let odd = (seg.fromKey + seg.channelOffset) & 1;
     let vol = 0;
+    let wind = 0;
     let cSide = 0;
     let csSide = 0;
     let offSide = 0;
-    const f0 = f;
     const d0 = d;
-    const len0 = Math.max(cOverDiv / f - k * d, (cOverDiv / f) * MIN_LF);
-    let foot0 = 0;
+    const len0 = Math.max(nominal - k * d, nominal * MIN_LF);
+    const foot0 = wood ? d * SQ_SIDE + 2 * (t > tMin ? t : tMin) : d;
     let footAtMain = 0;
     let diaAtMain = 0;
     for (let i = 0; i < n; i++) {
-      const nominal = cOverDiv / f;
       let len = nominal - k * d;
       if (len < nominal * MIN_LF) len = nominal * MIN_LF;
       const th = t > tMin ? t : tMin;
@@ -205,24 +211,28 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
         footprint = d;
         vol += (PI * d * (len * areaF + 0.5 * foot[cls]) + top * d * d) * th;
       }
-      if (i === 0) foot0 = footprint;
       const wdt = rowWidth(footprint, d, chestNorms);
       if (i < offN) offSide += wdt;
       else {
-        if (i === offN) [footAtMain, diaAtMain] = [footprint, d];
-        if (chanOdd === 0) cSide += wdt;
+        if (i === offN) {
+          footAtMain = footprint;
+          diaAtMain = d;
+        }
+        if (odd === 0) cSide += wdt;
         else csSide += wdt;
       }
       if (made) {
         bodyCounts[bodyBase + cls]++;
         pitchCounts[pitchBase + pcls]++;
       }
-      chanOdd ^= 1;
-      f *= SEMITONE;
+      wind += q;
+      odd ^= 1;
+      nominal *= INV_SEMITONE;
       d *= ratio;
       t *= tRatio;
-      body /= SEMITONE;
-      pitch /= SEMITONE;
+      q *= qRatio;
+      body *= INV_SEMITONE;
+      pitch *= INV_SEMITONE;
       while (cls < 4 && body <= BOUNDS[cls]) cls++;
       while (pcls < 4 && pitch <= BOUNDS[pcls]) pcls++;
     }
@@ -241,16 +251,15 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
       }
     }
     if (made) {
-      const m = MATERIAL_INDEX_[form.material];
       // Metal: mm³ × g/cm³ × 1e-6 = kg; timber: mm³ × 1e-9 = m³.
-      materials[st * MATERIAL_STRIDE + status * MATERIALS + m] += wood ? vol * 1e-9 : vol * g.densityGCm3 * 1e-6;
+      materials[st * MATERIAL_STRIDE + status * MATERIALS + run.material] += wood ? vol * 1e-9 : vol * g.densityGCm3 * 1e-6;
       windM3s[st] += wind;
       windPipes[st] += n;
     }
     if (len0 > maxLengthMm[st]) maxLengthMm[st] = len0;
     if (d0 > maxDiameterMm[st]) maxDiameterMm[st] = d0;
     if (f0 < minFrequencyHz[st]) minFrequencyHz[st] = f0;
-    const fTop = f / SEMITONE;
+    const fTop = f0 * exp2Semitones(n - 1);
     if (fTop > maxFrequencyHz[st]) maxFrequencyHz[st] = fTop;
     positions[div] += n - offN;
     offsetPipes[div] += offN;

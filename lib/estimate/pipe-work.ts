@@ -27,14 +27,21 @@ export interface StopPipeWork {
   readonly condition: readonly Finding[];
 }
 
+/** What one stop's pipe work booked: its hours, and the metal (kg) and timber (m³) bought for it. */
+export interface PipeWorkBooked {
+  readonly hours: number;
+  readonly metalBoughtKg: number;
+  readonly woodBoughtM3: number;
+}
+
 /**
  * Books one stop's pipe hours into `pipes` (making, restoring, voicing) and `installation`
- * (relocating), and its bought metal and timber into `pipes`. Returns the hours booked.
+ * (relocating), and its bought metal and timber into `pipes`.
  */
 export function bookPipeWork(
   s: StopPipeWork, bodyCounts: Float64Array, pitchCounts: Float64Array, finished: Float64Array,
   rates: Rates, pipes: CostCentre, installation: CostCentre,
-): number {
+): PipeWorkBooked {
   const n = rates.norms;
   let booked = 0;
   const add = (centre: CostCentre, dep: number, hours: number) => {
@@ -87,6 +94,8 @@ export function bookPipeWork(
 
   // Material bought: new metal and timber with their allowances; a share of restored pipes' metal for repairs.
   const restoredShare = s.work.includes("restored") ? rates.pipeMetal.repairPercent / 100 : 0;
+  let metalBoughtKg = 0;
+  let woodBoughtM3 = 0;
   for (let m = 0; m < MATERIAL_COUNT; m++) {
     const material = ALL_MATERIALS[m];
     const fresh = finished[s.stop * MATERIAL_STRIDE + m];
@@ -96,8 +105,10 @@ export function bookPipeWork(
     const allowance = wood ? rates.woodPipes.allowancePercent : rates.pipeMetal.allowancePercent[material as "spotted"];
     const bought = fresh * (1 + allowance / 100) + (wood ? 0 : old * restoredShare);
     pipes.materials[MATERIAL_LINE[material]] += bought;
+    if (wood) woodBoughtM3 += bought;
+    else metalBoughtKg += bought;
   }
-  return booked;
+  return { hours: booked, metalBoughtKg, woodBoughtM3 };
 }
 
 /** Tonal finishing on site, per stop and per pipe. */

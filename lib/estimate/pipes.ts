@@ -157,26 +157,8 @@ export function where(d: { readonly name: string }, s?: { readonly name: string 
 const footageText = (f: string | number) => (typeof f === "number" ? String(f) : f);
 const range = (lo: number, hi: number) => (lo === hi ? midiToNote(lo) : `${midiToNote(lo)}–${midiToNote(hi)}`);
 
-// Parsing footages and note names is the planner's main cost on a large scheme; both are pure
-// functions of short strings, so their results are kept (bounded: a scheme uses a few dozen values).
-const footageMemo = new Map<string | number, Fraction | null>();
-function footageOf(f: string | number): Fraction | null {
-  let v = footageMemo.get(f);
-  if (v === undefined) {
-    v = parseFootage(f);
-    if (footageMemo.size < 512) footageMemo.set(f, v);
-  }
-  return v;
-}
-const noteMemo = new Map<string, number | null>();
-function keyOf(n: string): number | null {
-  let v = noteMemo.get(n);
-  if (v === undefined) {
-    v = noteToMidi(n);
-    if (noteMemo.size < 512) noteMemo.set(n, v);
-  }
-  return v;
-}
+const footageOf = parseFootage;
+const keyOf = noteToMidi;
 const compassOf = (c: { readonly low: string; readonly high: string }) => {
   const lowMidi = keyOf(c.low);
   const highMidi = keyOf(c.high);
@@ -219,28 +201,29 @@ export function planScheme(scheme: Scheme): SchemePlan {
     const stopIndexes: number[] = [];
     division.stops.forEach((stop, si) => {
       const index = drafts.length;
-      const at = where(division, stop);
+      // Worded only when a message needs it: most stops are sound.
+      const at = () => where(division, stop);
       const sp = (field: string) => ["divisions", di, "stops", si, field];
-      if (stopById.has(stop.id)) say(sp("id"), `${at}: the id "${stop.id}" is used by another stop`);
+      if (stopById.has(stop.id)) say(sp("id"), `${at()}: the id "${stop.id}" is used by another stop`);
       else stopById.set(stop.id, index);
       let lowKey = c.lowMidi;
       let highKey = c.highMidi;
       if (stop.compass) {
         const sc = compassOf(stop.compass);
-        if (!sc) say(sp("compass"), `${at}: compass ${stop.compass.low}–${stop.compass.high} is not in note names`);
-        else if (sc.lowMidi > sc.highMidi) say(sp("compass"), `${at}: compass runs downward (${stop.compass.low} to ${stop.compass.high}); give the lowest note first`);
+        if (!sc) say(sp("compass"), `${at()}: compass ${stop.compass.low}–${stop.compass.high} is not in note names`);
+        else if (sc.lowMidi > sc.highMidi) say(sp("compass"), `${at()}: compass runs downward (${stop.compass.low} to ${stop.compass.high}); give the lowest note first`);
         else if (sc.lowMidi < c.lowMidi || sc.highMidi > c.highMidi)
-          say(sp("compass"), `${at}: compass ${stop.compass.low}–${stop.compass.high} goes beyond the division's ${division.compass.low}–${division.compass.high}`);
+          say(sp("compass"), `${at()}: compass ${stop.compass.low}–${stop.compass.high} goes beyond the division's ${division.compass.low}–${division.compass.high}`);
         else [lowKey, highKey] = [sc.lowMidi, sc.highMidi];
       }
       const footage = footageOf(stop.footage);
-      if (!footage) say(sp("footage"), `${at}: footage "${footageText(stop.footage)}" ${MSG_NOT_FOOTAGE}`);
+      if (!footage) say(sp("footage"), `${at()}: footage "${footageText(stop.footage)}" ${MSG_NOT_FOOTAGE}`);
       const f = footage ?? { num: 8, den: 1 };
       const notes = compassNoteCount(lowKey, highKey);
       const kind = kindOf(stop.origin);
       checkStopFields(stop, kind, notes, lowKey, highKey, at, sp, say);
       drafts.push({
-        index, divisionIndex: di, stop, kind, work: [...new Set(stop.work)],
+        index, divisionIndex: di, stop, kind, work: stop.work.length > 1 ? [...new Set(stop.work)] : stop.work,
         lowKey, highKey, notes, ranks: stop.ranks, ranksFrom: stop.ranks, ranksTo: stop.ranks,
         footage: f, footageText: formatFootage(f), harmonic: harmonicOf8ft(f),
         shift: semitonesAbove8ft(f, tuning), rootIndex: kind === "own" || kind === "prepared" ? index : -1,
@@ -328,15 +311,16 @@ export function planScheme(scheme: Scheme): SchemePlan {
     }
     if (d.kind !== "own" && d.kind !== "prepared") continue;
     d.forms = formsOf(d, forms);
-    const rankRuns = breakPlan(d, atOf(d), tuning, (field, message) => say(stopPath(d, field), message));
+    const rankRuns = breakPlan(d, tuning, (field, message) => say(stopPath(d, field), `${atOf(d)}: ${message}`));
     const status: PipeStatus = d.kind === "prepared" ? PREPARED : d.stop.origin === "existing" ? EXISTING : NEW;
     // Re-scaled ranks: the pipes move by rescaleHt keys; the keys they leave empty get new pipes.
     const shiftBy = status === EXISTING && d.work.includes("rescaled") ? d.stop.rescaleHt : 0;
     const newBelow = shiftBy > 0 ? d.lowKey + shiftBy : -Infinity;
     const newAbove = shiftBy < 0 ? d.highKey + shiftBy : Infinity;
+    const bassEnd = d.stop.bass ? d.lowKey + d.stop.bass.notes : -Infinity;
+    const flueFrom = d.stop.construction === "reed" && d.stop.fluesFrom ? keyOf(d.stop.fluesFrom) ?? Infinity : Infinity;
     let made = 0;
     let fresh = 0;
-    const perKey = new Uint8Array(d.notes);
     for (let r = 0; r < d.ranks; r++) {
       const row = rows.length;
       rows.push({ division: d.divisionIndex, stop: d.index, rank: r });
@@ -346,13 +330,13 @@ export function planScheme(scheme: Scheme): SchemePlan {
         const from = run.fromKey;
         const to = k + 1 < runs.length ? runs[k + 1].fromKey - 1 : d.highKey;
         if (to < from || !run.footage) continue; // empty, or a progressive rank silent in this range
-        for (let key = from; key <= to; key++) perKey[key - d.lowKey]++;
         // Split the run where the form or the state changes: basses, flue top, re-scaled ends.
         const cuts = [from, to + 1];
-        const bassEnd = d.stop.bass ? d.lowKey + d.stop.bass.notes : -Infinity;
-        const flueFrom = d.stop.construction === "reed" && d.stop.fluesFrom ? keyOf(d.stop.fluesFrom) ?? Infinity : Infinity;
-        for (const cut of [bassEnd, flueFrom, newBelow, newAbove + 1]) if (cut > from && cut <= to) cuts.push(cut);
-        cuts.sort((a, b) => a - b);
+        if (bassEnd > from && bassEnd <= to) cuts.push(bassEnd);
+        if (flueFrom > from && flueFrom <= to) cuts.push(flueFrom);
+        if (newBelow > from && newBelow <= to) cuts.push(newBelow);
+        if (newAbove + 1 > from && newAbove + 1 <= to) cuts.push(newAbove + 1);
+        if (cuts.length > 2) cuts.sort((a, b) => a - b);
         for (let c = 0; c + 1 < cuts.length; c++) {
           const a = cuts[c];
           const count = cuts[c + 1] - a;
@@ -368,14 +352,12 @@ export function planScheme(scheme: Scheme): SchemePlan {
         }
       }
     }
-    let lo = Infinity;
-    let hi = 0;
-    for (const n of perKey) {
-      if (n < lo) lo = n;
-      if (n > hi) hi = n;
+    // A progressive mixture sounds fewer ranks in its lower ranges (III–V).
+    if (d.stop.breaks?.some((b) => b.footages.includes(null))) {
+      const sounding = d.stop.breaks.map((b) => b.footages.filter((f) => f !== null).length);
+      d.ranksFrom = Math.min(...sounding);
+      d.ranksTo = Math.max(...sounding);
     }
-    d.ranksFrom = d.notes ? lo : d.ranks;
-    d.ranksTo = d.notes ? hi : d.ranks;
     if (status === PREPARED) d.pipes = counts(0, 0, 0, made, 0);
     else if (status === NEW) d.pipes = counts(made, 0, 0, 0, 0);
     else {
@@ -502,9 +484,12 @@ const RESONATOR = { full: 1, half: 1 / 2, quarter: 1 / 4, eighth: 1 / 8, sixteen
 
 /** Field rules a single stop can break on its own. */
 function checkStopFields(
-  stop: Stop, kind: StopKind, notes: number, lowKey: number, highKey: number, at: string,
+  stop: Stop, kind: StopKind, notes: number, lowKey: number, highKey: number, where: () => string,
   sp: (field: string) => (string | number)[], say: Say,
 ): void {
+  // Most stops pass every rule; the common case costs no string.
+  if (!stop.offsetBassPipes && !stop.work.length && !stop.rescaleHt && !stop.fluesFrom && !stop.resonator && !stop.bass && !stop.duplex) return;
+  const at = where();
   if (stop.offsetBassPipes > notes) say(sp("offsetBassPipes"), `${at}: ${stop.offsetBassPipes} offset bass pipes, but the stop has only ${notes} notes`);
   const existingPipes = stop.origin === "existing" || (stop.origin === "extension" && stop.addedPipes === "existing");
   if (stop.work.length && !existingPipes)
@@ -533,12 +518,16 @@ function checkStopFields(
  * Per rank, the runs of keys with one footage: from the breaks for mixtures, else the stop's
  * footage. A run is null where a progressive mixture's rank is silent.
  */
-function breakPlan(d: Draft, at: string, tuning: Scheme["tuning"]["mutations"], say: (field: string, message: string) => void): Run[][] {
-  const plain = () => Array.from({ length: d.ranks }, () => [{ fromKey: d.lowKey, shift: d.shift, footage: d.footage }]);
+function breakPlan(d: Draft, tuning: Scheme["tuning"]["mutations"], say: (field: string, message: string) => void): Run[][] {
+  const plain = () => {
+    const out: Run[][] = [];
+    for (let r = 0; r < d.ranks; r++) out.push([{ fromKey: d.lowKey, shift: d.shift, footage: d.footage }]);
+    return out;
+  };
   const breaks = d.stop.breaks;
   if (!breaks || breaks.length === 0) {
     if (d.ranks > 1 && (d.stop.family === "mixture" || d.stop.family === "mutation"))
-      say("breaks", `${at}: a ${d.stop.family} of ${d.ranks} ranks needs breaks giving each rank's footage`);
+      say("breaks", `a ${d.stop.family} of ${d.ranks} ranks needs breaks giving each rank's footage`);
     return plain();
   }
   const out: Run[][] = Array.from({ length: d.ranks }, () => []);
@@ -547,24 +536,24 @@ function breakPlan(d: Draft, at: string, tuning: Scheme["tuning"]["mutations"], 
   breaks.forEach((b, bi) => {
     const key = keyOf(b.from);
     if (key === null) {
-      say("breaks", `${at}: break "${b.from}" is not a note name`);
+      say("breaks", `break "${b.from}" is not a note name`);
       ok = false;
       return;
     }
     if (b.footages.length !== d.ranks) {
-      say("breaks", `${at}: the break at ${b.from} gives ${b.footages.length} footages for ${d.ranks} ranks`);
+      say("breaks", `the break at ${b.from} gives ${b.footages.length} footages for ${d.ranks} ranks`);
       ok = false;
     }
     if (key <= prevKey) {
-      say("breaks", `${at}: breaks must go upward; ${b.from} comes after a higher or equal note`);
+      say("breaks", `breaks must go upward; ${b.from} comes after a higher or equal note`);
       ok = false;
     }
     if (bi > 0 && (key < d.lowKey || key > d.highKey)) {
-      say("breaks", `${at}: break at ${b.from} lies outside the stop's compass`);
+      say("breaks", `break at ${b.from} lies outside the stop's compass`);
       ok = false;
     }
     if (b.footages.every((f) => f === null)) {
-      say("breaks", `${at}: the break at ${b.from} leaves every rank silent`);
+      say("breaks", `the break at ${b.from} leaves every rank silent`);
       ok = false;
     }
     prevKey = key;
@@ -577,7 +566,7 @@ function breakPlan(d: Draft, at: string, tuning: Scheme["tuning"]["mutations"], 
       }
       const f = footageOf(text);
       if (!f) {
-        say("breaks", `${at}: break at ${b.from}, rank ${r + 1}: footage "${footageText(text)}" ${MSG_NOT_FOOTAGE}`);
+        say("breaks", `break at ${b.from}, rank ${r + 1}: footage "${footageText(text)}" ${MSG_NOT_FOOTAGE}`);
         ok = false;
         continue;
       }

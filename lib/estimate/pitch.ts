@@ -53,6 +53,17 @@ export const MSG_NOT_FOOTAGE = "is not a footage; write a whole number of feet o
 export const MAX_FOOTAGE_TEXT = 16;
 
 export function parseFootage(input: string | number): Fraction | null {
+  // A scheme uses a few dozen footages, parsed again on every edit: keep what was parsed (bounded).
+  const known = footageMemo.get(input);
+  if (known !== undefined) return known;
+  const f = parseFootageText(input);
+  if (footageMemo.size < 1024) footageMemo.set(input, f);
+  return f;
+}
+
+const footageMemo = new Map<string | number, Fraction | null>();
+
+function parseFootageText(input: string | number): Fraction | null {
   let f: Fraction | null = null;
   if (typeof input === "number") {
     if (Number.isInteger(input)) f = { num: input, den: 1 };
