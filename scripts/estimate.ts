@@ -48,7 +48,7 @@ function summary(e: Estimate): string {
   }
   const w = e.schemeWide;
   lines.push([
-    pad("Console, transport (scheme)", 30, true), pad("", 5), pad("", 6), pad("", 7), pad("", 7), pad("", 6), pad("", 15), pad("", 5),
+    pad("Organ as a whole", 30, true), pad("", 5), pad("", 6), pad("", 7), pad("", 7), pad("", 6), pad("", 15), pad("", 5),
     pad(w.hoursTotal.toFixed(1), 9), pad("", 9), pad("", 8), pad(w.wiring.conductorLengthM, 7), pad(money(w.directCostAmount), 14),
   ].join(" "));
   lines.push("-".repeat(head.length));
@@ -60,11 +60,34 @@ function summary(e: Estimate): string {
     pad(money(e.money.subtotalAmount), 14),
   ].join(" "));
   lines.push(`Ranks ${t.ranks}; prepared-for pipes ${t.pipes.prepared}; pipes removed ${t.pipes.removed}; wiring ${t.wiring.conductors} conductors, ${t.wiring.conductorLengthKm} km.`);
+  lines.push(`${t.hoursPerStop} hours a stop. Pipe metal in the organ ${t.metalTotalKg} kg, to buy ${t.metalBoughtTotalKg} kg (new pipes with casting allowance, repairs).`);
+  lines.push("");
+  lines.push(`Parts of the work`);
+  for (const p of e.packages) {
+    const cost = e.money.byPackage.find((b) => b.package === p.package)?.directCostAmount ?? "0.00";
+    lines.push(`  ${pad(p.label, 30, true)} ${pad(p.hoursTotal.toFixed(1), 9)} h  ${pad(money(cost), 14)} ${cur}`);
+  }
+  lines.push("");
+  const wind = e.wind;
+  lines.push(`Wind: ${wind.blowerM3PerMin} m³/min at ${wind.blowerPressureMm} mm, blower motor ${wind.blowerKw} kW; reservoirs ${wind.reservoirs.map((r) => `${r.pressureMm} mm ${r.flowM3PerMin} m³/min`).join(", ")}; trunk ${wind.trunkM} m.`);
+  const c = e.case;
+  lines.push(
+    c.work === "none"
+      ? "Case: not part of the work."
+      : `Case: ${c.work}, ${c.widthMm}×${c.depthMm}×${c.heightMm} mm (${c.sized}), ${c.surfaceM2} m² of casework; ${c.frontPipes} front pipes${c.dummyPipes ? `, ${c.dummyPipes} of them dummies (${c.dummyMetalKg} kg)` : ""}.`,
+  );
+  for (const d of e.divisions) if (d.swellBox) lines.push(`Swell box, ${d.name}: ${d.swellBox.widthMm}×${d.swellBox.depthMm}×${d.swellBox.heightMm} mm (${d.swellBox.sized}), walls ${d.swellBox.wallM2} m², shutters ${d.swellBox.shutterM2} m², ${d.swellBox.mechanism} drive.`);
+  const st = e.site;
+  lines.push(
+    `Site: ${st.transport.distanceKm} km away; ${st.transport.loadsOut} load(s) out, ${st.transport.loadsIn} in (organ ${st.weights.totalKg} kg, existing material ${st.weights.existingToWorkshopKg} kg); ` +
+      `${st.time.weeks} weeks on site, ${st.time.personWeeks} person-weeks${st.time.lodging ? ", crew lodging" : ""}${st.time.scaffold ? ", scaffolding" : ""}.`,
+  );
   lines.push("");
   lines.push(`Money (${cur})`);
   const row = (label: string, amount: string) => lines.push(`  ${pad(label, 44, true)} ${pad(money(amount), 16)}`);
   for (const l of e.money.labour) row(`${l.label}: ${l.hours.toFixed(1)} h at ${l.rateAmount}`, l.amount);
   for (const m of e.money.materials) row(`${m.label}: ${m.quantity} ${m.unit} at ${m.priceAmount}`, m.amount);
+  for (const i of e.money.items) row(`${i.label}: ${i.quantity} at ${i.priceAmount} ${i.unit}`, i.amount);
   row("Subtotal", e.money.subtotalAmount);
   row(`Overhead ${e.money.overhead.percent}%`, e.money.overhead.amount);
   row(`Contingency ${e.money.contingency.percent}%`, e.money.contingency.amount);

@@ -100,6 +100,11 @@ export function setAccessories(doc: SchemeDocument, accessories: SchemeDocument[
   return { ...doc, accessories };
 }
 
+/** The case, the wind system and the site, replaced together. */
+export function setWorks(doc: SchemeDocument, works: Pick<SchemeDocument, "case" | "wind" | "site">): SchemeDocument {
+  return { ...doc, case: works.case, wind: works.wind, site: works.site };
+}
+
 
 export function countStops(doc: SchemeDocument): number {
   return doc.divisions.reduce((n, d) => n + d.stops.length, 0);

@@ -1,7 +1,7 @@
 "use client";
 import { Caution } from "@/components/ui/caution";
 import { StateMark } from "@/components/ui/state-mark";
-import { departmentLabels, departments } from "@/lib/estimate";
+import { departmentLabels, departments, packageLabels } from "@/lib/estimate";
 import { materialLabels } from "./format";
 import { chestWords, fitState } from "./chest-words";
 import { formatNumber } from "./format";
@@ -88,37 +88,73 @@ export function FiguresPanel({ figures, showMoney }: { figures: Figures; showMon
           </ul>
         </div>
 
+        <div data-testid="fig-parts">
+          <h3 className="label">Parts of the work</h3>
+          <table className="w-full text-xs">
+            <thead className="sr-only">
+              <tr><th>Part</th><th>Hours</th>{showMoney && <th>Direct cost</th>}</tr>
+            </thead>
+            <tbody>
+              {e.packages.map((p) => {
+                const cost = showMoney ? e.money.byPackage.find((b) => b.package === p.package)?.directCostAmount : undefined;
+                return (
+                  <tr key={p.package} data-testid={`fig-part-${p.package}`}>
+                    <td className="py-0.5 text-ink-soft">{packageLabels[p.package]}</td>
+                    <td className="num py-0.5 text-right">{formatNumber(p.hoursTotal, 0)} h</td>
+                    {showMoney && <td className="num py-0.5 pl-2 text-right">{cost ? money(cost, e.money.currency) : "–"}</td>}
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+          <ul className="mt-1 space-y-0.5 text-[11px] text-tin">
+            <li data-testid="fig-wind">
+              Wind {formatNumber(e.wind.blowerM3PerMin, 1)} m³/min at {formatNumber(e.wind.blowerPressureMm, 0)} mm, blower {formatNumber(e.wind.blowerKw, 2)} kW; {e.wind.reservoirs.length} reservoir{e.wind.reservoirs.length === 1 ? "" : "s"}.
+            </li>
+            <li data-testid="fig-case">
+              {e.case.work === "none" ? "No case work." : `Case ${e.case.work}: ${formatNumber(e.case.surfaceM2, 0)} m² of casework${e.case.frontPipes ? `, ${formatNumber(e.case.frontPipes)} front pipes` : ""}.`}
+            </li>
+            <li data-testid="fig-site">
+              Site {formatNumber(e.site.transport.distanceKm)} km: {formatNumber(e.site.transport.loadsOut + e.site.transport.loadsIn)} loads, {formatNumber(e.site.time.weeks, 1)} weeks on site{e.site.time.lodging ? ", crew lodging" : ""}.
+            </li>
+          </ul>
+        </div>
+
         <div>
-          <h3 className="label">Materials</h3>
+          <h3 className="label">Materials and weight</h3>
           <dl>
-          <Row label="Pipe metal" value={`${formatNumber(t.metalTotalKg, 1)} kg`} strong testId="fig-metal" />
-          {metals.map(([m, kg]) => <Row key={m} label={materialLabels[m]} value={`${formatNumber(kg, 1)} kg`} />)}
-          {woods.map(([m, m3]) => <Row key={m} label={`${materialLabels[m]} board`} value={`${formatNumber(m3, 3)} m³`} />)}
-          {t.wiring.conductorLengthKm > 0 && <Row label="Cable" value={`${formatNumber(t.wiring.conductorLengthKm, 2)} km`} />}
-        </dl>
+            <Row label="Pipe metal in the organ" value={`${formatNumber(t.metalTotalKg, 1)} kg`} strong testId="fig-metal" />
+            {metals.map(([m, kg]) => <Row key={m} label={materialLabels[m]} value={`${formatNumber(kg, 1)} kg`} />)}
+            <Row label="Pipe metal to buy" value={`${formatNumber(t.metalBoughtTotalKg, 1)} kg`} testId="fig-metal-bought" />
+            {woods.map(([m, m3]) => <Row key={m} label={`${materialLabels[m]} in pipes`} value={`${formatNumber(m3, 3)} m³`} />)}
+            {t.wiring.conductorLengthKm > 0 && <Row label="Cable" value={`${formatNumber(t.wiring.conductorLengthKm, 2)} km`} />}
+            <Row label="The organ weighs" value={`${formatNumber(e.site.weights.totalKg / 1000, 1)} t`} testId="fig-weight" />
+          </dl>
         </div>
 
         <div data-testid="fig-hours">
           <h3 className="label">Hours by department</h3>
           <dl>
-          {departments.filter((d) => t.hours[d] > 0).map((d) => <Row key={d} label={departmentLabels[d]} value={formatNumber(t.hours[d], 0)} />)}
-          <Row label="Total hours" value={formatNumber(t.hoursTotal, 0)} strong testId="fig-hours-total" />
-          {e.programme.totalWeeks > 0 && <Row label="Programme" value={`${formatNumber(e.programme.totalWeeks)} weeks`} />}
-        </dl>
+            {departments.filter((d) => t.hours[d] > 0).map((d) => <Row key={d} label={departmentLabels[d]} value={formatNumber(t.hours[d], 0)} />)}
+            <Row label="Total hours" value={formatNumber(t.hoursTotal, 0)} strong testId="fig-hours-total" />
+            <Row label="Hours a stop" value={formatNumber(t.hoursPerStop, 0)} testId="fig-hours-per-stop" />
+            {e.programme.totalWeeks > 0 && <Row label="Programme" value={`${formatNumber(e.programme.totalWeeks)} weeks`} />}
+          </dl>
         </div>
 
         {showMoney && "money" in e && (
           <div>
             <h3 className="label">Money</h3>
-          <dl data-testid="money-lines">
-            <Row label="Labour" value={money(e.money.labourAmount, e.money.currency)} />
-            <Row label="Materials" value={money(e.money.materialsAmount, e.money.currency)} />
-            <Row label={`Overheads ${e.money.overhead.percent} %`} value={money(e.money.overhead.amount, e.money.currency)} />
-            <Row label={`Contingency ${e.money.contingency.percent} %`} value={money(e.money.contingency.amount, e.money.currency)} />
-            <Row label={`Margin ${e.money.margin.percent} %`} value={money(e.money.margin.amount, e.money.currency)} />
-            <Row label={`Tax ${e.money.tax.percent} %`} value={money(e.money.tax.amount, e.money.currency)} />
-            <Row label="Total" value={money(e.money.totalAmount, e.money.currency)} strong testId="fig-money" />
-          </dl>
+            <dl data-testid="money-lines">
+              <Row label="Labour" value={money(e.money.labourAmount, e.money.currency)} />
+              <Row label="Materials" value={money(e.money.materialsAmount, e.money.currency)} />
+              <Row label="Bought in, site and travel" value={money(e.money.itemsAmount, e.money.currency)} testId="fig-money-items" />
+              <Row label={`Overheads ${e.money.overhead.percent} %`} value={money(e.money.overhead.amount, e.money.currency)} />
+              <Row label={`Contingency ${e.money.contingency.percent} %`} value={money(e.money.contingency.amount, e.money.currency)} />
+              <Row label={`Margin ${e.money.margin.percent} %`} value={money(e.money.margin.amount, e.money.currency)} />
+              <Row label={`Tax ${e.money.tax.percent} %`} value={money(e.money.tax.amount, e.money.currency)} />
+              <Row label="Total" value={money(e.money.totalAmount, e.money.currency)} strong testId="fig-money" />
+            </dl>
             <p className="mt-1 text-[11px] text-tin">From the firm&apos;s rates ({e.ratesProvenance}).</p>
           </div>
         )}

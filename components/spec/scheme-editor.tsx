@@ -9,10 +9,11 @@ import { Dialog } from "@/components/ui/dialog";
 import { StateMark } from "@/components/ui/state-mark";
 import { schemeDocumentSchema, type SchemeDocument, type SchemeRead } from "@/lib/spec/document";
 import { AccessoriesEditor } from "./accessories-editor";
+import { WorksEditor } from "./works-editor";
 import { ChestsView } from "./chests-view";
 import { DivisionBoard } from "./division-board";
 import { DivisionForm } from "./division-form";
-import { addDivision, addStop, findStop, newId, removeDivision, removeStop, setAccessories, updateDivision, updateStop } from "./doc-ops";
+import { addDivision, addStop, findStop, newId, removeDivision, removeStop, setAccessories, setWorks, updateDivision, updateStop } from "./doc-ops";
 import { FiguresPanel } from "./figures-panel";
 import { formatDateTime, formatTimeOfDay, pitchText } from "./format";
 import { historyReducer, initHistory } from "./history";
@@ -31,7 +32,7 @@ type Editing =
   | { kind: "details" }
   | null;
 
-type Tab = "stops" | "chests" | "accessories";
+type Tab = "stops" | "chests" | "accessories" | "works";
 
 const detailsSchema = schemeDocumentSchema.pick({ name: true, description: true });
 
@@ -279,6 +280,7 @@ export function SchemeEditor({
                 ["stops", "Divisions and stops"],
                 ["chests", "Chests"],
                 ["accessories", "Couplers and accessories"],
+                ["works", "Case, wind and site"],
               ] as const
             ).map(([key, label]) => (
               <button
@@ -327,6 +329,9 @@ export function SchemeEditor({
             {tab === "chests" && <ChestsView figures={figures} rates={drawingRulesOf(figureSource)} />}
             {tab === "accessories" && (
               <AccessoriesEditor key={save.version + ":" + history.past.length} doc={doc} editable={editable} onApply={(acc) => edit(setAccessories(doc, acc), "Changed couplers and accessories")} />
+            )}
+            {tab === "works" && (
+              <WorksEditor key={save.version + ":" + history.past.length} doc={doc} editable={editable} onApply={(w) => edit(setWorks(doc, w), "Changed the case, wind and site")} />
             )}
           </div>
         </div>
