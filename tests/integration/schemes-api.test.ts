@@ -19,13 +19,53 @@ async function revisionCount(schemeId: string) {
 }
 
 describe("schemes API", () => {
+  it("reads stops stored in the first format as the current one, pipes and sizes unchanged, and saves them in the current one", async () => {
+    const { scheme, cookie } = await setUp();
+    // Rewrite two stored stops as an earlier version of Stopwright saved them.
+    await testDb().query(
+      `update stops set treatment = 'restored', props = (props - 'origin' - 'work') || '{"treatment":"restored","construction":"reed-full","family":"reed","scale":{"offsetHt":-2,"halvingOn":19,"mouthWidth":0.25}}'::jsonb where scheme_id = $1 and id = 'gt-pr'`,
+      [scheme.id],
+    );
+    await testDb().query(`update stops set treatment = 'extension', props = (props - 'origin') || '{"treatment":"extension"}'::jsonb where scheme_id = $1 and id = 'ped-bass'`, [scheme.id]);
+    const read = await api(`/api/schemes/${scheme.id}`, { cookie });
+    expect(read.status).toBe(200);
+    const principal = read.json.scheme.document.divisions[0].stops[1];
+    expect(principal).toMatchObject({ origin: "existing", work: ["restored"], construction: "reed", resonator: { length: "full", shape: "conical" } });
+    expect(principal).not.toHaveProperty("treatment");
+    // −2 ht from 8′ C on a 4′ rank halving on the 19th is −0.44 ht at its own 4′ C: 12 + 16 · (−2 − 12)/18.
+    expect(principal.scale).toEqual({ deviationHt: -0.44, halvingOn: 19, mouthWidth: 0.25 });
+    expect(read.json.scheme.document.divisions[1].stops[1]).toMatchObject({ origin: "extension", source: "ped-bd" });
+    const estimate = await api(`/api/schemes/${scheme.id}/estimate`, { cookie });
+    expect(estimate.status).toBe(200);
+    // Saved again, the stops are stored in the current format, with their disposition in a word.
+    const saved = await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: read.json.scheme.document } });
+    expect(saved.status).toBe(200);
+    const { rows } = await testDb().query("select treatment, props from stops where scheme_id = $1 and id = 'gt-pr'", [scheme.id]);
+    expect(rows[0].treatment).toBe("restored");
+    expect(rows[0].props).toMatchObject({ origin: "existing", work: ["restored"] });
+    expect(rows[0].props).not.toHaveProperty("treatment");
+  });
+
+  it("keeps the case, wind and site of a scheme", async () => {
+    const { scheme, cookie } = await setUp();
+    const doc = { ...scheme.document, case: { ...scheme.document.case, work: "restored", widthMm: 4000 }, site: { ...scheme.document.site, distanceKm: 210 } };
+    const saved = await api(`/api/schemes/${scheme.id}`, { method: "PUT", cookie, body: { version: 1, document: doc } });
+    expect(saved.status).toBe(200);
+    const reread = await api(`/api/schemes/${scheme.id}`, { cookie });
+    expect(reread.json.scheme.document.case).toMatchObject({ work: "restored", widthMm: 4000 });
+    expect(reread.json.scheme.document.site.distanceKm).toBe(210);
+    const { rows } = await testDb().query("select works from schemes where id = $1", [scheme.id]);
+    expect(rows[0].works.case.work).toBe("restored");
+  });
+
   it("creates a scheme with its divisions and stops in order, as version 1 with a revision", async () => {
     const { scheme, project } = await setUp();
     expect(scheme).toMatchObject({ projectId: project.id, name: "Scheme A", version: 1, status: "draft", sharedWithClient: false });
     expect(scheme.document.divisions.map((d: { name: string }) => d.name)).toEqual(["Great", "Pedal"]);
     expect(scheme.document.divisions[0].stops.map((s: { name: string }) => s.name)).toEqual(["Open Diapason", "Principal", "Twelfth", "Fifteenth"]);
     // Defaults of the scheme model are filled in and kept.
-    expect(scheme.document.divisions[0].stops[2]).toMatchObject({ footage: "2 2/3", ranks: 1, treatment: "new", construction: "open" });
+    expect(scheme.document.divisions[0].stops[2]).toMatchObject({ footage: "2 2/3", ranks: 1, origin: "new", work: [], construction: "open" });
+    expect(scheme.document.case).toMatchObject({ work: "none" });
     expect(await revisionCount(scheme.id)).toBe(1);
   });
 
