@@ -182,7 +182,7 @@ export const demoProjects = [
       location: "Vellmar (invented city)",
       instrument: "Five-manual concert organ, electric action, partly reusing an earlier instrument (invented)",
       status: "tender" as const,
-      targetDate: "2031-09-01",
+      targetDate: "2033-06-30",
       pitchHz: 440,
       temperatureC: 18,
       notes: "Large example scheme for trying the editor at full size. (Invented.)",

@@ -274,7 +274,7 @@ export function SchemeEditor({
 
       <div className="grid items-start gap-4 lg:grid-cols-[minmax(0,1fr)_21rem]">
         <div className="min-w-0 space-y-3">
-          <div role="tablist" aria-label="Views of the scheme" className="flex items-center gap-1 border-b border-tin-rule">
+          <div role="tablist" aria-label="Views of the scheme" className="flex items-center gap-1 overflow-x-auto border-b border-tin-rule">
             {(
               [
                 ["stops", "Divisions and stops"],
@@ -290,14 +290,14 @@ export function SchemeEditor({
                 id={`tab-${key}`}
                 aria-selected={tab === key}
                 aria-controls={`panel-${key}`}
-                className={`-mb-px rounded-t border px-3 py-1.5 text-sm ${tab === key ? "border-tin-rule border-b-paper bg-paper font-semibold text-ink" : "border-transparent text-ink-soft hover:text-ink"}`}
+                className={`-mb-px shrink-0 whitespace-nowrap rounded-t border px-3 py-1.5 text-sm ${tab === key ? "border-tin-rule border-b-paper bg-paper font-semibold text-ink" : "border-transparent text-ink-soft hover:text-ink"}`}
                 onClick={() => setTab(key)}
               >
                 {label}
               </button>
             ))}
             {editable && tab === "stops" && (
-              <button type="button" className="btn ml-auto mb-1" onClick={() => setEditing({ kind: "division", newId: newId("div") })}>
+              <button type="button" className="btn ml-auto mb-1 shrink-0 whitespace-nowrap" onClick={() => setEditing({ kind: "division", newId: newId("div") })}>
                 + Add division
               </button>
             )}

@@ -272,7 +272,7 @@ export function StopForm({
         <legend className="px-1 text-xs font-semibold uppercase tracking-wide text-tin">Scale</legend>
         <div className="grid gap-3 sm:grid-cols-5">
           <div>
-            <label className="label" htmlFor="stop-deviation">Deviation (semitones)</label>
+            <label className="label" htmlFor="stop-deviation">Deviation</label>
             <input id="stop-deviation" type="number" step="any" className="field num" aria-invalid={!!err.scale?.deviationHt} {...register("scale.deviationHt", { valueAsNumber: true })} />
             <Err e={err.scale?.deviationHt} />
           </div>
