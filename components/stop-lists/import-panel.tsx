@@ -3,8 +3,7 @@ import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ApiError, call } from "@/components/spec/api";
-import { pitchText, treatmentLabels } from "@/components/spec/format";
-import type { Treatment } from "@/lib/estimate/scheme";
+import { dispositionText, pitchText } from "@/components/spec/format";
 import type { SchemeRead } from "@/lib/spec/document";
 import { formatForFileName, IMPORT_MAX_CHARS, type ImportPreview, type ImportRequest } from "@/lib/spec/import";
 
@@ -46,7 +45,7 @@ function Summary({ preview }: { preview: Extract<ImportPreview, { ok: true }> })
                 <li key={i} className="flex gap-2">
                   <span className="flex-1">{s.name}</span>
                   <span className="num">{pitchText(s)}</span>
-                  <span className="w-20 text-right text-xs text-tin">{treatmentLabels[s.treatment as Treatment] ?? s.treatment}</span>
+                  <span className="w-32 text-right text-xs text-tin">{dispositionText(s)}</span>
                 </li>
               ))}
             </ul>

@@ -1,6 +1,7 @@
 /** An import of a stop list (CSV) or scheme file (JSON) into a project: the request and the preview. Pure. */
 import { z } from "zod";
 import type { SchemeDocument } from "./document";
+import type { Origin, PipeWork } from "@/lib/estimate/scheme";
 import type { ImportProblem } from "./stop-list-csv";
 
 /** Far above any organ's stop list (a 250-stop CSV is about 100 kB), so a runaway file is refused early. */
@@ -33,7 +34,7 @@ export type ImportRequest = z.input<typeof importRequestSchema>;
 
 export type ImportSummary = {
   name: string;
-  divisions: { name: string; keyboard: string; stops: { name: string; footage: string | number; ranks: number; family: string; treatment: string }[] }[];
+  divisions: { name: string; keyboard: string; stops: { name: string; footage: string | number; ranks: number; family: string; origin: Origin; work: PipeWork[] }[] }[];
   stopCount: number;
 };
 
@@ -47,7 +48,7 @@ export function summarise(doc: SchemeDocument): ImportSummary {
     divisions: doc.divisions.map((d) => ({
       name: d.name,
       keyboard: d.keyboard,
-      stops: d.stops.map((s) => ({ name: s.name, footage: s.footage, ranks: s.ranks, family: s.family, treatment: s.treatment })),
+      stops: d.stops.map((s) => ({ name: s.name, footage: s.footage, ranks: s.ranks, family: s.family, origin: s.origin, work: [...s.work] })),
     })),
     stopCount: doc.divisions.reduce((n, d) => n + d.stops.length, 0),
   };

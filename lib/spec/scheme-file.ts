@@ -15,6 +15,9 @@ export function toSchemeFile(doc: SchemeDocument, tuning: Tuning) {
     tuning: { pitchHz: tuning.pitchHz, temperatureC: tuning.temperatureC, mutations: "tempered" as const },
     divisions: doc.divisions,
     accessories: doc.accessories,
+    case: doc.case,
+    wind: doc.wind,
+    site: doc.site,
   };
 }
 
@@ -53,7 +56,10 @@ export function readSchemeFile(text: string, opts: { name?: string; tuning: Tuni
   }
   if (file.rates !== undefined) notes.push("The file's rates and norms were not imported: the firm's own rates price every scheme.");
   if (file.programme !== undefined) notes.push("The file's programme dates were not imported.");
-  const raw = { name: opts.name?.trim() || file.name, description: file.description ?? "", divisions: file.divisions, accessories: file.accessories };
+  const raw = {
+    name: opts.name?.trim() || file.name, description: file.description ?? "", divisions: file.divisions, accessories: file.accessories,
+    case: file.case, wind: file.wind, site: file.site,
+  };
   const check = checkDocument(raw);
   if (check.ok) return { ok: true, document: check.document, notes };
   const problems = Object.entries(check.fields).flatMap(([path, messages]) => messages.map((message) => ({ column: path, message })));

@@ -7,22 +7,24 @@
  */
 import Papa from "papaparse";
 import type { z } from "zod";
-import { divisionSchema, stopSchema } from "@/lib/estimate/scheme";
+import { divisionSchema, stopFormSchema } from "@/lib/estimate/scheme";
 import { MSG_NOT_FOOTAGE, parseFootage } from "@/lib/estimate/pitch";
 import { checkDocument } from "./validate";
 import type { DocDivision, SchemeDocument } from "./document";
 
 export type ImportProblem = { row?: number; column?: string; message: string };
 
-type Kind = "text" | "number" | "integer" | "boolean" | "enum" | "footage" | "breaks" | "json";
+type Kind = "text" | "number" | "integer" | "boolean" | "enum" | "list" | "footage" | "breaks" | "json";
 export type CsvColumn = {
-  /** The column's heading in the file: the field's path in the scheme model ("scale.offsetHt"). */
+  /** The column's heading in the file: the field's path in the scheme model ("scale.deviationHt"). */
   header: string;
   scope: "division" | "stop";
   /** Path inside the division or stop object. */
   path: string[];
   kind: Kind;
   options?: readonly string[];
+  /** Values of the first scheme format also read (the scheme model upgrades them). */
+  legacy?: readonly string[];
   required: boolean;
 };
 
@@ -30,10 +32,18 @@ export type CsvColumn = {
 const STOP_HEADERS: Record<string, string> = { footage: "pitch", name: "name", id: "stop id" };
 const DIVISION_HEADERS: Record<string, string> = { name: "division", id: "division id" };
 /** The columns a person reads first; everything else follows in the model's order. */
-const FIRST = ["division", "name", "pitch", "ranks", "family", "treatment", "material", "construction", "compass.low", "compass.high", "source"];
+const FIRST = ["division", "name", "pitch", "ranks", "family", "origin", "work", "material", "construction", "compass.low", "compass.high", "source"];
+
+/** A silent rank in a progressive mixture's break, in one cell. */
+const SILENT = "–";
 
 // zod 4 internals we rely on: `def.type` and `def.innerType` for wrappers, `options` for enums, `isInt` for numbers.
 type AnyDef = { type: string; innerType?: z.ZodType; shape?: Record<string, z.ZodType>; element?: z.ZodType };
+/** Columns of the first scheme format, read and passed to the scheme model, which upgrades them; never written. */
+const LEGACY_COLUMNS: CsvColumn[] = [
+  { header: "treatment", scope: "stop", path: ["treatment"], kind: "enum", options: ["new", "retained", "restored", "revoiced", "relocated", "extension", "borrowed", "prepared", "removed"], required: false },
+  { header: "scale.offsetHt", scope: "stop", path: ["scale", "offsetHt"], kind: "number", required: false },
+];
 type Node = z.ZodType & { def: AnyDef; options?: readonly string[]; isInt?: boolean; shape?: Record<string, z.ZodType> };
 
 function unwrap(schema: z.ZodType): { node: Node; optional: boolean } {
@@ -66,16 +76,23 @@ function columnsOf(shape: Record<string, z.ZodType>, scope: CsvColumn["scope"], 
     else if (t === "boolean") kind = "boolean";
     else if (t === "enum") kind = "enum";
     else if (t === "union") kind = "text";
+    let options = kind === "enum" ? node.options : undefined;
+    if (t === "array" && node.def.element && unwrap(node.def.element).node.def.type === "enum") {
+      // A list of words in one cell: "restored, revoiced".
+      kind = "list";
+      options = unwrap(node.def.element).node.options;
+    }
     const joined = path.join(".");
     const header = scope === "stop" ? (STOP_HEADERS[joined] ?? joined) : (DIVISION_HEADERS[joined] ?? `division.${joined}`);
-    out.push({ header, scope, path, kind, options: kind === "enum" ? node.options : undefined, required });
+    const legacy = joined === "construction" ? ["reed-full", "reed-half"] : undefined;
+    out.push({ header, scope, path, kind, options, legacy, required });
   }
   return out;
 }
 
 /** Every column, in the order written: the first ones a person reads, then the stop's, then the division's. */
 export function stopListColumns(): CsvColumn[] {
-  const all = [...columnsOf(divisionSchema.shape, "division", ["stops"]), ...columnsOf(stopSchema.shape, "stop", [])];
+  const all = [...columnsOf(divisionSchema.shape, "division", ["stops"]), ...columnsOf(stopFormSchema.shape, "stop", [])];
   const first = FIRST.map((h) => all.find((c) => c.header === h)).filter((c): c is CsvColumn => !!c);
   const rest = all.filter((c) => !first.includes(c));
   return [...first, ...rest.filter((c) => c.scope === "stop"), ...rest.filter((c) => c.scope === "division")];
@@ -89,9 +106,9 @@ function get(obj: unknown, path: string[]): unknown {
   return v;
 }
 
-/** Mixture breaks in one cell: "C: 1 1/3, 1, 2/3; c': 2 2/3, 2, 1 1/3". */
-export function formatBreaks(breaks: readonly { from: string; footages: readonly (string | number)[] }[] | undefined): string {
-  return (breaks ?? []).map((b) => `${b.from}: ${b.footages.join(", ")}`).join("; ");
+/** Mixture breaks in one cell: "C: 1 1/3, 1, 2/3; c': 2 2/3, 2, 1 1/3"; a dash for a silent rank. */
+export function formatBreaks(breaks: readonly { from: string; footages: readonly (string | number | null)[] }[] | undefined): string {
+  return (breaks ?? []).map((b) => `${b.from}: ${b.footages.map((f) => (f === null ? SILENT : f)).join(", ")}`).join("; ");
 }
 
 // A spreadsheet runs a cell that starts with = + - @ as a formula; names and ids get a leading
@@ -102,6 +119,7 @@ function cellText(col: CsvColumn, value: unknown): string {
   if (value === undefined || value === null) return "";
   if (col.kind === "breaks") return formatBreaks(value as never);
   if (col.kind === "boolean") return value ? "yes" : "no";
+  if (col.kind === "list") return (value as readonly string[]).join(", ");
   if (col.kind === "json") return JSON.stringify(value);
   const text = String(value);
   return col.kind === "text" && FORMULA_START.test(text) ? `'${text}` : text;
@@ -151,11 +169,11 @@ function set(obj: Record<string, unknown>, path: string[], value: unknown) {
 type Cell = { ok: true; value: unknown } | { ok: false; message: string };
 
 function readBreaks(text: string): Cell {
-  const out: { from: string; footages: string[] }[] = [];
+  const out: { from: string; footages: (string | null)[] }[] = [];
   for (const part of text.split(";").map((p) => p.trim()).filter(Boolean)) {
     const m = /^([^:]+):(.+)$/.exec(part);
     if (!m) return { ok: false, message: `"${part}" is not a break; write each as a note, a colon and the footages of every rank, e.g. C: 1 1/3, 1, 2/3; c': 2 2/3, 2, 1 1/3` };
-    out.push({ from: m[1]!.trim(), footages: m[2]!.split(",").map((f) => f.trim()).filter(Boolean) });
+    out.push({ from: m[1]!.trim(), footages: m[2]!.split(",").map((f) => f.trim()).filter(Boolean).map((f) => (/^[-–—]$/.test(f) ? null : f)) });
   }
   return { ok: true, value: out.length ? out : undefined };
 }
@@ -184,9 +202,15 @@ function readCell(col: CsvColumn, raw: string): Cell {
     }
     case "enum": {
       const t = text.toLowerCase().replace(/[\s_]+/g, "-");
-      // "Prepared for", "Spotted metal", "Reed full": the model's word may be followed by more words.
+      if (col.legacy?.includes(t)) return { ok: true, value: t };
+      // "Prepared for", "Spotted metal": the model's word may be followed by more words.
       const hit = col.options!.find((o) => t === o) ?? col.options!.find((o) => t.startsWith(`${o}-`));
       return hit ? { ok: true, value: hit } : { ok: false, message: `"${text}" is not one of ${col.options!.join(", ")}` };
+    }
+    case "list": {
+      const words = text.split(/[,;]/).map((w) => w.trim().toLowerCase().replace(/[\s_]+/g, "-")).filter(Boolean);
+      const bad = words.find((w) => !col.options!.includes(w));
+      return bad ? { ok: false, message: `"${bad}" is not one of ${col.options!.join(", ")}` } : { ok: true, value: words };
     }
     case "breaks":
       return readBreaks(text);
@@ -227,7 +251,7 @@ export function readStopListCsv(text: string, opts: { name: string; description?
   if (!headings.length || rows.length === 0) return { ok: false, problems: [{ message: "The file has no stops: a heading row, then one row per stop." }], notes };
 
   const columns = stopListColumns();
-  const byNorm = new Map(columns.map((c) => [norm(c.header), c]));
+  const byNorm = new Map([...columns, ...LEGACY_COLUMNS].map((c) => [norm(c.header), c]));
   // A division property may also be headed without "division." where no stop property has that name ("keyboard", "action").
   const stopPaths = new Set(columns.filter((c) => c.scope === "stop").map((c) => norm(c.path.join("."))));
   for (const c of columns) if (c.scope === "division" && !stopPaths.has(norm(c.path.join(".")))) byNorm.set(norm(c.path.join(".")), byNorm.get(norm(c.path.join("."))) ?? c);
@@ -328,7 +352,9 @@ export function readStopListCsv(text: string, opts: { name: string; description?
   }
 
   const accessories = base ? keepAccessories(base, docDivisions as { id: string }[], notes) : undefined;
-  const raw = { name: opts.name, description: opts.description ?? "", divisions: docDivisions, ...(accessories ? { accessories } : {}) };
+  // The case, wind and site are no part of a stop list either: a draft keeps its own.
+  const works = base ? { case: base.case, wind: base.wind, site: base.site } : {};
+  const raw = { name: opts.name, description: opts.description ?? "", divisions: docDivisions, ...(accessories ? { accessories } : {}), ...works };
   const check = checkDocument(raw);
   if (check.ok) return { ok: true, document: check.document, notes };
   for (const [path, messages] of Object.entries(check.fields)) {

@@ -52,7 +52,7 @@ describe("stop lists in and out", () => {
     const { cookie, project, scheme } = await setUp();
     const before = await estimateOf(scheme.id, cookie);
     const csv = await exported(scheme.id, cookie, "csv");
-    expect(csv.startsWith("\uFEFFdivision,name,pitch,ranks,family,treatment")).toBe(true);
+    expect(csv.startsWith("\uFEFFdivision,name,pitch,ranks,family,origin,work")).toBe(true);
     expect(csv.trim().split("\r\n")).toHaveLength(1 + 6);
     const body = { format: "csv", fileName: "Scheme-A.csv", text: csv, target: { kind: "replace", schemeId: scheme.id, version: 1 } };
     const saved = await api(`/api/projects/${project.id}/imports`, { method: "POST", cookie, body });

@@ -21,7 +21,7 @@ const docs: [string, SchemeDocument][] = [
 
 /** A CSV cell has no type: a footage written as the number 8 in a scheme file comes back as the text "8" (the same footage). */
 function footagesAsText(doc: SchemeDocument): SchemeDocument {
-  return { ...doc, divisions: doc.divisions.map((d) => ({ ...d, stops: d.stops.map((s) => ({ ...s, footage: String(s.footage), breaks: s.breaks?.map((b) => ({ ...b, footages: b.footages.map(String) })) })) })) };
+  return { ...doc, divisions: doc.divisions.map((d) => ({ ...d, stops: d.stops.map((s) => ({ ...s, footage: String(s.footage), breaks: s.breaks?.map((b) => ({ ...b, footages: b.footages.map((f) => (f === null ? null : String(f))) })) })) })) };
 }
 
 function estimate(doc: SchemeDocument) {
@@ -49,33 +49,35 @@ describe("stop list CSV", () => {
     expect(parsed.errors).toEqual([]);
     expect(parsed.data).toHaveLength(doc.divisions.reduce((n, d) => n + d.stops.length, 0));
     const mixture = parsed.data.find((r) => r.name === "Mixture")!;
-    expect(mixture).toMatchObject({ division: "Swell", pitch: "1 1/3", ranks: "3", family: "mixture", treatment: "restored", breaks: "C: 1 1/3, 1, 2/3; c': 2 2/3, 2, 1 1/3" });
-    expect(parsed.meta.fields!.slice(0, 6)).toEqual(["division", "name", "pitch", "ranks", "family", "treatment"]);
+    expect(mixture).toMatchObject({ division: "Swell", pitch: "1 1/3", ranks: "3", family: "mixture", origin: "existing", work: "restored", breaks: "C: 1 1/3, 1, 2/3; c': 2 2/3, 2, 1 1/3" });
+    expect(parsed.meta.fields!.slice(0, 7)).toEqual(["division", "name", "pitch", "ranks", "family", "origin", "work"]);
   });
 
   it("reads a hand-made list with pitches as the trade writes them, Roman ranks, labels and no ids", () => {
     const rows = (sesquialtera: string, source: string) => [
-      "Division,Stop,Pitch,Ranks,Family,Treatment,Material,Source",
-      "Great,Open Diapason,8′,,principal,New,Spotted metal,",
-      "Great,Twelfth,2⅔,,mutation,Prepared for,,",
-      "Great,Tierce,1 3/5,,mutation,new,,",
+      "Division,Stop,Pitch,Ranks,Family,Treatment,Material,Source,Chest",
+      "Great,Open Diapason,8′,,principal,New,Spotted metal,,",
+      "Great,Twelfth,2⅔,,mutation,Prepared for,,,",
+      "Great,Tierce,1 3/5,,mutation,new,,,",
       sesquialtera,
-      "Pedal,Bourdon,16',,flute,restored,pine,",
-      `Pedal,Bass Flute,8,,flute,extension,pine,${source}`,
+      // An extended rank stands on a unit chest.
+      "Pedal,Bourdon,16',,flute,restored,pine,,pitman",
+      `Pedal,Bass Flute,8,,flute,extension,pine,${source},pitman`,
     ].join("\n");
     // A two-rank mutation needs its breaks, an extension its source: both named by their rows.
-    const bad = readStopListCsv(rows("Great,Sesquialtera,2 2/3,II,mutation,new,,", ""), { name: "By hand" });
+    const bad = readStopListCsv(rows("Great,Sesquialtera,2 2/3,II,mutation,new,,,", ""), { name: "By hand" });
     expect(bad.ok).toBe(false);
     if (bad.ok) return;
     expect(bad.problems.map((p) => p.row)).toEqual([5, 7]);
     expect(bad.problems[0]!.message).toMatch(/^Row 5: Division "Great", stop "Sesquialtera"/);
     expect(bad.problems[1]!.message).toMatch(/^Row 7: Division "Pedal", stop "Bass Flute"/);
 
-    const good = readStopListCsv(rows("Great,Fifteenth,2,,principal,new,,", "Bourdon"), { name: "By hand" });
+    const good = readStopListCsv(rows("Great,Fifteenth,2,,principal,new,,,", "Bourdon"), { name: "By hand" });
     expect(good.ok, JSON.stringify(!good.ok && good.problems)).toBe(true);
     if (!good.ok) return;
     const [great, pedal] = good.document.divisions;
-    expect(great!.stops.map((s) => [s.name, s.footage, s.treatment, s.material])).toEqual([
+    // A "Treatment" column, as the first format wrote it, is read as where the pipes come from and the work on them.
+    expect(great!.stops.map((s) => [s.name, s.footage, s.origin, s.material])).toEqual([
       ["Open Diapason", "8′", "new", "spotted"],
       ["Twelfth", "2⅔", "prepared", "spotted"],
       ["Tierce", "1 3/5", "new", "spotted"],
@@ -84,7 +86,8 @@ describe("stop list CSV", () => {
     // A pedal division by its name, with the 32-note compass (AGO console standard: C–g′).
     expect(pedal).toMatchObject({ keyboard: "pedal", compass: { low: "C", high: "g'" } });
     expect(pedal!.stops[0]!.footage).toBe("16'");
-    expect(pedal!.stops[1]).toMatchObject({ treatment: "extension", source: pedal!.stops[0]!.id });
+    expect(pedal!.stops[0]).toMatchObject({ origin: "existing", work: ["restored"] });
+    expect(pedal!.stops[1]).toMatchObject({ origin: "extension", source: pedal!.stops[0]!.id });
     const roman = readStopListCsv("division,name,pitch,ranks,family\nGreat,Celeste,8,II,string\n", { name: "x" });
     expect(roman.ok && roman.document.divisions[0]!.stops[0]!.ranks).toBe(2);
   });
