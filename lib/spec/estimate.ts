@@ -2,17 +2,21 @@
  * The estimate of a saved scheme document under its project's tuning: the one call the server and
  * the editor's live figures share. Pure.
  */
-import { estimateScheme, parseScheme, type Estimate, type Rates, type Scheme } from "@/lib/estimate";
+import { describeIssue, estimateScheme, planScheme, schemeSchema, type Estimate, type Rates, type Scheme } from "@/lib/estimate";
 import { toEstimatorScheme, type SchemeDocument, type Tuning } from "./document";
 
 export type DocumentEstimate = { ok: true; estimate: Estimate; scheme: Scheme } | { ok: false; messages: readonly string[] };
 
 export function estimateDocument(doc: SchemeDocument, tuning: Tuning, rates: Rates): DocumentEstimate {
   if (!doc.divisions.length) return { ok: false, messages: ["Add a division to see the figures."] };
-  // parseScheme runs the same consistency checks estimateScheme needs, so this never throws.
-  const parsed = parseScheme(toEstimatorScheme(doc, tuning));
-  if (!parsed.ok) return { ok: false, messages: parsed.messages };
-  return { ok: true, estimate: estimateScheme(parsed.scheme, rates), scheme: parsed.scheme };
+  // The checks parseScheme makes, with the plan kept for the estimate (it is the estimate's first
+  // stage): the live figures plan a scheme once per edit, not twice. This never throws.
+  const input = toEstimatorScheme(doc, tuning);
+  const parsed = schemeSchema.safeParse(input);
+  if (!parsed.success) return { ok: false, messages: parsed.error.issues.map((i) => describeIssue(i.path, i.message, input)) };
+  const plan = planScheme(parsed.data);
+  if (plan.messages.length) return { ok: false, messages: [...plan.messages] };
+  return { ok: true, estimate: estimateScheme(parsed.data, rates, plan), scheme: parsed.data };
 }
 
 /** The rules a chest drawing needs (clearances, board thickness, cut-up): no price, norm or crew among them. */
