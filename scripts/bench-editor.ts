@@ -94,10 +94,10 @@ async function main() {
 
   // A copy of the large scheme with ten changes: five stops restored instead of new, five removed.
   const post = (url: string, method: string, body: unknown) => fetch(url, { method, headers: { cookie, "content-type": "application/json", origin: base }, body: JSON.stringify(body) });
-  const copy = ((await (await post(`${base}/api/schemes/${scheme.id}/duplicate`, "POST", { name: `Bench copy ${Date.now()}` })).json()) as { scheme: { id: string; version: number; document: { divisions: { stops: { id: string; treatment: string; source?: string }[] }[] } } }).scheme;
+  const copy = ((await (await post(`${base}/api/schemes/${scheme.id}/duplicate`, "POST", { name: `Bench copy ${Date.now()}` })).json()) as { scheme: { id: string; version: number; document: { divisions: { stops: { id: string; origin: string; work?: string[]; source?: string }[] }[] } } }).scheme;
   const used = new Set(copy.document.divisions.flatMap((d) => d.stops.map((s) => s.source).filter(Boolean)));
-  const plain = copy.document.divisions.flatMap((d) => d.stops).filter((s) => s.treatment === "new" && !used.has(s.id) && !s.source);
-  for (const s of plain.slice(0, 5)) s.treatment = "restored";
+  const plain = copy.document.divisions.flatMap((d) => d.stops).filter((s) => s.origin === "new" && !used.has(s.id) && !s.source);
+  for (const s of plain.slice(0, 5)) Object.assign(s, { origin: "existing", work: ["restored"] });
   const gone = new Set(plain.slice(5, 10).map((s) => s.id));
   for (const d of copy.document.divisions) d.stops = d.stops.filter((s) => !gone.has(s.id));
   const saved = await post(`${base}/api/schemes/${copy.id}`, "PUT", { version: copy.version, document: copy.document, note: "ten changes for the benchmark" });

@@ -31,9 +31,10 @@ function Cell({ cell }: { cell: StopCell }) {
   return (
     <span data-mark={cell.mark}>
       <span className="flex items-baseline gap-1.5">
-        <TreatmentMark treatment={cell.treatment} className="h-3 w-3 shrink-0 translate-y-0.5" />
+        <TreatmentMark mark={cell.disposition} className="h-3 w-3 shrink-0 translate-y-0.5" />
         <span>{cell.name} <span className="num text-ink-soft">{cell.pitch}</span></span>
       </span>
+      <span className="block pl-[18px] text-[11px] text-ink-soft" data-testid="compare-disposition">{cell.dispositionText}</span>
       {m.word && <span className={`block text-[11px] font-semibold ${m.cls}`}><span aria-hidden="true">{m.sign} </span>{m.word}</span>}
       {cell.changes.length > 0 && (
         <ul className="text-[11px] text-ink-soft">
@@ -149,7 +150,7 @@ function Tables({ view, projectId, chosen }: { view: ComparisonView; projectId: 
       <div className="grid gap-6 lg:grid-cols-2">
         <section className="panel p-4">
           <StackedBars
-            title="Pipes by treatment"
+            title="New, restored and reused pipes"
             testId="chart-pipes"
             series={[{ key: "new", label: "New pipes" }, { key: "restored", label: "Restored pipes" }, { key: "reused", label: "Reused pipes" }]}
             rows={view.pipesByTreatment.map((p, i) => ({ label: names[i]!, values: { new: p.new, restored: p.restored, reused: p.reused } }))}

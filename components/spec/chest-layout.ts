@@ -5,7 +5,7 @@
  * equal on the example schemes.
  */
 import {
-  chestSize, pipesOfStop, placeRow, planScheme, rowDepthMm, rowOf, type ChestSize, type PipeDetail, type Rates, type RowPipe, type Scheme,
+  chestSize, pipesOfStop, placeRow, planScheme, rowDepthMm, rowOf, type ChestSize, type GeometryRules, type PipeDetail, type RowPipe, type Scheme,
 } from "@/lib/estimate";
 
 export type PlacedPipe = {
@@ -34,7 +34,7 @@ export type ChestPlan = {
 type Piece = RowPipe & { key: number; keyName: string; wood: boolean; prepared: boolean; offset: boolean };
 
 /** Lays out the chest of division `divisionId`; null when it has no pipes on a chest. */
-export function layChest(scheme: Scheme, divisionId: string, rates: Rates): ChestPlan | null {
+export function layChest(scheme: Scheme, divisionId: string, rates: GeometryRules): ChestPlan | null {
   const plan = planScheme(scheme);
   if (plan.messages.length) return null;
   const dIndex = plan.divisions.findIndex((d) => d.division.id === divisionId);

@@ -96,12 +96,12 @@ export function FiguresPanel({ figures, showMoney }: { figures: Figures; showMon
             </thead>
             <tbody>
               {e.packages.map((p) => {
-                const cost = showMoney ? e.money.byPackage.find((b) => b.package === p.package)?.directCostAmount : undefined;
+                const cost = showMoney && "money" in e ? e.money.byPackage.find((b) => b.package === p.package)?.directCostAmount : undefined;
                 return (
                   <tr key={p.package} data-testid={`fig-part-${p.package}`}>
                     <td className="py-0.5 text-ink-soft">{packageLabels[p.package]}</td>
                     <td className="num py-0.5 text-right">{formatNumber(p.hoursTotal, 0)} h</td>
-                    {showMoney && <td className="num py-0.5 pl-2 text-right">{cost ? money(cost, e.money.currency) : "–"}</td>}
+                    {showMoney && <td className="num py-0.5 pl-2 text-right">{cost && "money" in e ? money(cost, e.money.currency) : "–"}</td>}
                   </tr>
                 );
               })}

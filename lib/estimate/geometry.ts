@@ -19,6 +19,42 @@ import { EXISTING, NEW, planScheme, type PipeForm, type SchemePlan } from "./pip
 import { nominalLengthMm, sizeClassIndex, sizeClasses, type SizeClass } from "./departments";
 import { windPressureMm, PA_PER_MM_WATER } from "./units";
 
+/**
+ * The rules pipe geometry and the chest drawing need: chest clearances, sheet and board thickness,
+ * cut-up, alloys and the flue's wind. No price, labour norm, crew or percentage among them, so a
+ * reader without money:read may hold them.
+ */
+export type GeometryRules = {
+  readonly chest: Rates["chest"];
+  readonly pipeMetal: Pick<Rates["pipeMetal"], "thicknessAt8ftCMm" | "thicknessExponent" | "minimumThicknessMm" | "thicknessFactor" | "footLengthMm" | "capSkirtPerDiameter">;
+  readonly woodPipes: Omit<Rates["woodPipes"], "allowancePercent">;
+  readonly cutUpByFamily: Rates["cutUpByFamily"];
+  readonly alloys: Rates["alloys"];
+  readonly wind: WindRules;
+};
+type WindRules = Pick<Rates["wind"], "windwayAt8ftCMm" | "windwayExponent" | "dischargeCoefficient" | "reedFlowFactor" | "airDensityKgM3">;
+
+/** The geometry rules out of a firm's rates, and nothing else of them. */
+export function geometryRules(rates: Rates): GeometryRules {
+  const m = rates.pipeMetal;
+  const w = rates.wind;
+  const { allowancePercent: _a, ...woodPipes } = rates.woodPipes;
+  return {
+    chest: rates.chest,
+    pipeMetal: {
+      thicknessAt8ftCMm: m.thicknessAt8ftCMm, thicknessExponent: m.thicknessExponent, minimumThicknessMm: m.minimumThicknessMm,
+      thicknessFactor: m.thicknessFactor, footLengthMm: m.footLengthMm, capSkirtPerDiameter: m.capSkirtPerDiameter,
+    },
+    woodPipes,
+    cutUpByFamily: rates.cutUpByFamily,
+    alloys: rates.alloys,
+    wind: {
+      windwayAt8ftCMm: w.windwayAt8ftCMm, windwayExponent: w.windwayExponent, dischargeCoefficient: w.dischargeCoefficient,
+      reedFlowFactor: w.reedFlowFactor, airDensityKgM3: w.airDensityKgM3,
+    },
+  };
+}
+
 export interface FormGeometry {
   readonly resonator: Resonator;
   /** c / (divisor · f) is the uncorrected length. */
@@ -52,14 +88,14 @@ export interface FormGeometry {
 
 /** Alloy densities of the rates, g/cm³, worked out once per set of rates. */
 const densityMemo = new WeakMap<Rates["alloys"], Readonly<Record<Metal, number>>>();
-function densitiesOf(rates: Rates): Readonly<Record<Metal, number>> {
+function densitiesOf(rates: GeometryRules): Readonly<Record<Metal, number>> {
   let d = densityMemo.get(rates.alloys);
   if (!d) densityMemo.set(rates.alloys, (d = Object.fromEntries(metals.map((m) => [m, alloyDensityGCm3(rates.alloys[m])])) as Record<Metal, number>));
   return d;
 }
 
 /** Constants of one form of a rank, with its owner stop's scale, under the firm's rates. */
-export function formGeometry(form: PipeForm, owner: Scheme["divisions"][number]["stops"][number], rates: Rates): FormGeometry {
+export function formGeometry(form: PipeForm, owner: Scheme["divisions"][number]["stops"][number], rates: GeometryRules): FormGeometry {
   const resonator = resonatorOf(form.construction);
   const reed = form.reed;
   const f = owner.family === "reed" ? "principal" : owner.family;
@@ -111,7 +147,7 @@ export function jetSpeedMPerS(pressureMm: number, airDensityKgM3: number): numbe
  * with W the mouth width, δ the windway depth δ₈ · (W / 122 mm)^e and v the jet speed; a reed takes
  * `reedFlowFactor` times the flue of its scale. Docs: docs/estimating-method.md, "Wind".
  */
-export function windFlowM3s(mouthMm: number, pressureMm: number, perMouth: number, w: Rates["wind"]): number {
+export function windFlowM3s(mouthMm: number, pressureMm: number, perMouth: number, w: WindRules): number {
   const delta = w.windwayAt8ftCMm * Math.pow(mouthMm / REFERENCE_MOUTH_MM, w.windwayExponent);
   return perMouth * w.dischargeCoefficient * mouthMm * delta * 1e-6 * jetSpeedMPerS(pressureMm, w.airDensityKgM3);
 }
@@ -167,7 +203,7 @@ export const MSG_NO_SUCH_STOP = "no stop with this id in the scheme";
  * they play ("borrowed"). Values are computed pipe by pipe from the formulas, not from the
  * estimator's running products. Throws MSG_NO_SUCH_STOP for an unknown id.
  */
-export function pipesOfStop(scheme: Scheme, stopId: string, rates: Rates, plan: SchemePlan = planScheme(scheme)): PipeDetail[] {
+export function pipesOfStop(scheme: Scheme, stopId: string, rates: GeometryRules, plan: SchemePlan = planScheme(scheme)): PipeDetail[] {
   const sp = plan.stops.find((s) => s.stop.id === stopId);
   if (!sp) throw new Error(MSG_NO_SUCH_STOP);
   const root = sp.rootIndex >= 0 ? plan.stops[sp.rootIndex] : sp;

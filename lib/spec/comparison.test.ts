@@ -22,7 +22,7 @@ const total = (d: SchemeDocument) => {
 const base = doc();
 const other = doc((d) => {
   d.name = "Other (invented)";
-  stopOf(d, "gt-od").treatment = "restored";
+  Object.assign(stopOf(d, "gt-od"), { origin: "existing", work: ["restored"] });
   d.divisions[0]!.stops = d.divisions[0]!.stops.filter((s) => s.id !== "gt-12");
   d.divisions[0]!.stops.push({ ...stopOf(d, "gt-15"), id: "gt-fl", name: "Flute", footage: "4", family: "flute" });
 });
@@ -36,7 +36,10 @@ describe("the comparison page's layout of compareStops and compareEstimates", ()
     const view = compareDocuments({ schemes, tuning, rates: DEFAULT_RATES, access: { money: true, hours: true } });
     const great = view.divisions.find((d) => d.id === "gt")!;
     const cell = (stopId: string) => great.rows.find((r) => r.stopId === stopId)!.cells[1]!;
-    expect(cell("gt-od")).toMatchObject({ mark: "changed", changes: [{ field: "treatment", label: "treatment", from: "New", to: "Restored" }] });
+    expect(cell("gt-od")).toMatchObject({
+      mark: "changed", disposition: "restored", dispositionText: "Existing: restored",
+      changes: [{ field: "origin", label: "pipes", from: "New", to: "Existing" }, { field: "work", label: "work on existing pipes", from: "as it is", to: "restored" }],
+    });
     expect(cell("gt-12")).toEqual({ mark: "removed" });
     expect(cell("gt-fl")).toMatchObject({ mark: "added", name: "Flute", pitch: "4′" });
     expect(cell("gt-pr").mark).toBe("same");
@@ -67,7 +70,7 @@ describe("the comparison page's layout of compareStops and compareEstimates", ()
 
 describe("what each change is worth on its own", () => {
   it("equals the whole difference when the schemes differ by one change", () => {
-    const one = doc((d) => void (stopOf(d, "gt-od").treatment = "retained"));
+    const one = doc((d) => void (stopOf(d, "gt-od").origin = "existing"));
     const [c] = costOfChanges({ base, other: one, tuning, rates: DEFAULT_RATES });
     expect(c).toMatchObject({ stopId: "gt-od", kind: "changed" });
     expect(c!.diffAmount).toBe(new Decimal(total(one)).minus(total(base)).toFixed(2));
@@ -75,7 +78,7 @@ describe("what each change is worth on its own", () => {
 
   it("finds that retaining a stop instead of making it new saves money, and adding one costs", () => {
     const costs = costOfChanges({ base, other: doc((d) => {
-      stopOf(d, "gt-od").treatment = "retained";
+      stopOf(d, "gt-od").origin = "existing";
       d.divisions[0]!.stops.push({ ...stopOf(d, "gt-15"), id: "gt-x", name: "Octave", footage: "4" });
     }), tuning, rates: DEFAULT_RATES });
     expect(new Decimal(costs.find((c) => c.stopId === "gt-od")!.diffAmount!).isNegative()).toBe(true);

@@ -8,8 +8,8 @@
 import { departmentLabels, departments, type Estimate, type Rates, type Scheme } from "@/lib/estimate";
 import { compareEstimates, compareStops } from "@/lib/estimate/compare";
 import { diffAmount } from "@/lib/estimate/money";
-import type { Treatment } from "@/lib/estimate/scheme";
-import { pitchText, treatmentLabels } from "@/components/spec/format";
+import { pipeWorks, type Origin, type PipeWork } from "@/lib/estimate/scheme";
+import { dispositionMark, dispositionText, originLabels, pipeWorkLabels, pitchText, type DispositionMark } from "@/components/spec/format";
 import type { DocStop, SchemeDocument, Tuning } from "./document";
 import { estimateDocument } from "./estimate";
 
@@ -28,7 +28,16 @@ export type ComparedScheme = { id: string; name: string; version: number; docume
 export type FieldChangeText = { field: string; label: string; from: string; to: string };
 
 export type StopCell =
-  | { mark: "base" | "same" | "added" | "changed"; name: string; pitch: string; treatment: Treatment; changes: FieldChangeText[] }
+  | {
+      mark: "base" | "same" | "added" | "changed";
+      name: string;
+      pitch: string;
+      /** Where the stop's pipes come from, or the main work on existing ones, for its mark … */
+      disposition: DispositionMark;
+      /** … and in words ("Existing: restored, revoiced"). */
+      dispositionText: string;
+      changes: FieldChangeText[];
+    }
   | { mark: "removed" | "absent" };
 
 export type StopRow = { stopId: string; cells: StopCell[] };
@@ -49,7 +58,7 @@ export type ComparisonView = {
   divisions: DivisionBlock[];
   /** Stops, ranks, pipes (new, reused, restored), metal and programme weeks. */
   totals: FigureRow<number>[];
-  /** Pipes by treatment per scheme, for the chart. */
+  /** Pipes new, reused and restored per scheme, for the chart. */
   pipesByTreatment: { schemeId: string; new: number; reused: number; restored: number }[];
   hours?: { rows: FigureRow<number>[] };
   money?: { currency: string; rows: FigureRow<string>[] };
@@ -57,12 +66,29 @@ export type ComparisonView = {
 
 const FIELD_LABELS: Record<string, string> = {
   name: "name", footage: "pitch", ranks: "ranks", breaks: "breaks", family: "family", construction: "construction", material: "material",
-  scale: "scale", compass: "compass", treatment: "treatment", source: "source rank", offsetBassPipes: "basses off the chest", division: "division",
+  scale: "scale", compass: "compass", origin: "pipes", work: "work on existing pipes", source: "source rank", addedPipes: "added pipes",
+  rescaleHt: "moved by", condition: "survey", duplex: "duplex", resonator: "resonators", fluesFrom: "flues from", bass: "bass",
+  offsetBassPipes: "basses off the chest", division: "division",
 };
+
+/** compareStops gives lists as JSON; the work on existing pipes reads best as words. */
+function workText(v: string): string {
+  if (v === "—") return "as it is";
+  let list: unknown;
+  try {
+    list = JSON.parse(v);
+  } catch {
+    return v;
+  }
+  if (!Array.isArray(list)) return v;
+  const work = pipeWorks.filter((w) => list.includes(w));
+  return work.length ? work.map((w) => pipeWorkLabels[w as PipeWork].toLowerCase()).join(", ") : "as it is";
+}
 
 function changeText(field: string, from: string, to: string): FieldChangeText {
   const label = FIELD_LABELS[field] ?? field;
-  if (field === "treatment") return { field, label, from: treatmentLabels[from as Treatment] ?? from, to: treatmentLabels[to as Treatment] ?? to };
+  if (field === "origin") return { field, label, from: originLabels[from as Origin] ?? from, to: originLabels[to as Origin] ?? to };
+  if (field === "work") return { field, label, from: workText(from), to: workText(to) };
   if (field === "footage") return { field, label, from: pitchText({ footage: from, family: "" }), to: pitchText({ footage: to, family: "" }) };
   // Structured values (scale, compass, breaks) read badly as data: say that they changed.
   const structured = (v: string) => v.startsWith("{") || v.startsWith("[");
@@ -81,7 +107,7 @@ function estimated(doc: SchemeDocument, tuning: Tuning, rates: Rates): Estimated
 }
 
 const cellOf = (stop: DocStop, mark: "base" | "same" | "added" | "changed", changes: FieldChangeText[] = []): StopCell => ({
-  mark, name: stop.name, pitch: pitchText(stop), treatment: stop.treatment, changes,
+  mark, name: stop.name, pitch: pitchText(stop), disposition: dispositionMark(stop), dispositionText: dispositionText(stop), changes,
 });
 
 function figureRow(key: string, label: string, unit: string, values: (number | null)[], diffs: (number | null)[]): FigureRow<number> {
@@ -175,6 +201,7 @@ export function compareDocuments({ schemes, tuning, rates, access }: { schemes: 
       rows: [
         m("labour", "Labour", (e) => e.money.labourAmount, (c) => c.money.labour.diffAmount),
         m("materials", "Materials", (e) => e.money.materialsAmount, (c) => c.money.materials.diffAmount),
+        m("items", "Bought in", (e) => e.money.itemsAmount, (c) => c.money.items.diffAmount),
         m("overhead", "Overheads", (e) => e.money.overhead.amount, (c) => c.money.overhead.diffAmount),
         m("contingency", "Contingency", (e) => e.money.contingency.amount, (c) => c.money.contingency.diffAmount),
         m("margin", "Margin", (e) => e.money.margin.amount, (c) => c.money.margin.diffAmount),

@@ -2,7 +2,7 @@
  * The estimate of a saved scheme document under its project's tuning: the one call the server and
  * the editor's live figures share. Pure.
  */
-import { describeIssue, estimateScheme, planScheme, schemeSchema, type Estimate, type Rates, type Scheme } from "@/lib/estimate";
+import { describeIssue, estimateScheme, geometryRules, planScheme, schemeSchema, type Estimate, type GeometryRules, type Rates, type Scheme } from "@/lib/estimate";
 import { toEstimatorScheme, type SchemeDocument, type Tuning } from "./document";
 
 export type DocumentEstimate = { ok: true; estimate: Estimate; scheme: Scheme } | { ok: false; messages: readonly string[] };
@@ -19,10 +19,10 @@ export function estimateDocument(doc: SchemeDocument, tuning: Tuning, rates: Rat
   return { ok: true, estimate: estimateScheme(parsed.data, rates, plan), scheme: parsed.data };
 }
 
-/** The rules a chest drawing needs (clearances, board thickness, cut-up): no price, norm or crew among them. */
-export type DrawingRules = Pick<Rates, "chest" | "boardThicknessMm" | "cutUpFraction">;
+/** The rules a chest drawing needs (clearances, sheet and board thickness, cut-up, alloys): no price, norm or crew among them. */
+export type DrawingRules = GeometryRules;
 export function drawingRules(rates: Rates): DrawingRules {
-  return { chest: rates.chest, boardThicknessMm: rates.boardThicknessMm, cutUpFraction: rates.cutUpFraction };
+  return geometryRules(rates);
 }
 
 /** An estimate as a reader without money:read holds it: no money lines, no direct costs, no word of the rates used. */

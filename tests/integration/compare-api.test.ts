@@ -15,7 +15,7 @@ describe("GET /api/projects/:id/compare", () => {
     const ids: string[] = [];
     for (const name of ["One", "Two", "Three", "Four", "Five"]) {
       const document = smallDocument(name);
-      if (name === "Two") document.divisions![0]!.stops![0]!.treatment = "retained";
+      if (name === "Two") document.divisions![0]!.stops![0]!.origin = "existing";
       const s = (await api(`/api/projects/${project.id}/schemes`, { method: "POST", cookie, body: { name, document } })).json.scheme;
       await api(`/api/schemes/${s.id}`, { method: "PATCH", cookie, body: { sharedWithClient: true } });
       ids.push(s.id);
@@ -30,7 +30,7 @@ describe("GET /api/projects/:id/compare", () => {
 
     const firm = (await api(url(4), { cookie })).json.comparison;
     expect(firm.schemes.map((s: { name: string }) => s.name)).toEqual(["One", "Two", "Three", "Four"]);
-    expect(firm.divisions[0].rows[0].cells[1]).toMatchObject({ mark: "changed", changes: [{ field: "treatment", from: "New", to: "Retained" }] });
+    expect(firm.divisions[0].rows[0].cells[1]).toMatchObject({ mark: "changed", changes: [{ field: "origin", from: "New", to: "Existing" }] });
     const newPipes = firm.totals.find((r: { key: string }) => r.key === "pipes-new");
     expect(newPipes.diffs[1]).toBe(-61);
     expect(firm.money.rows.find((r: { key: string }) => r.key === "total").diffs[1]).toMatch(/^-\d+\.\d\d$/);

@@ -4,15 +4,31 @@ import { join } from "node:path";
 import { DEFAULT_RATES } from "@/lib/estimate/demo-rates";
 import { estimateScheme, parseSchemeFile } from "@/lib/estimate";
 import { layChest } from "@/components/spec/chest-layout";
+import { drawingRules } from "@/lib/spec/estimate";
 
 describe("the chest drawing and the figures", () => {
+  it("draw from rules that hold no price, labour norm, crew or percentage", () => {
+    const keys: string[] = [];
+    const walk = (v: unknown, path: string) => {
+      if (!v || typeof v !== "object") return;
+      for (const [k, x] of Object.entries(v)) {
+        keys.push(`${path}${k}`);
+        walk(x, `${path}${k}.`);
+      }
+    };
+    walk(drawingRules(DEFAULT_RATES), "");
+    expect(keys).toContain("chest.clearanceMinMm");
+    expect(keys.filter((k) => /price|amount|rate|norm|crew|percent|margin|items|programme/i.test(k))).toEqual([]);
+  });
+
   for (const file of ["small-two-manual.json", "large-five-manual.json"]) {
     it(`agree on every chest of ${file}: length, depth, halves, rows and the offset chests`, () => {
       const r = parseSchemeFile(readFileSync(join(__dirname, "../../examples", file), "utf8"), DEFAULT_RATES);
       if (!r.ok) throw new Error(r.messages.join("\n"));
       const e = estimateScheme(r.scheme, r.rates);
       for (const d of e.divisions) {
-        const plan = layChest(r.scheme, d.id, r.rates);
+        // Drawn as a reader without money:read gets it, from the drawing rules alone.
+        const plan = layChest(r.scheme, d.id, drawingRules(r.rates));
         if (d.chest.main.rows === 0 && !d.chest.offset) {
           expect(plan, d.name).toBeNull();
           continue;
