@@ -4,6 +4,8 @@ import { z } from "zod";
 import { parseRates, ratesSchema, withoutPrices } from "./rates";
 import { estimateScheme } from "./estimate";
 import { manual, scheme, stop } from "./test-support/schemes";
+import firstFormatRates from "./test-support/first-format-rates.json";
+import { sizeClasses } from "./departments";
 
 describe("rates and norms", () => {
   it("ships a complete default set that its own schema accepts, marked as invented", () => {
@@ -59,6 +61,27 @@ describe("rates and norms", () => {
       expect(r.messages.some((m) => m.startsWith("Rates: alloys.zinc:") && /add up to 1/.test(m))).toBe(true);
       expect(r.messages.some((m) => m.startsWith("Rates: items.blowerBase:"))).toBe(true);
     }
+  });
+
+  it("reads a rate set of the first format, keeping the firm's figures where their meaning is unchanged", () => {
+    // The first format's demo set as it was stored (one cut-up, one flue-voicing and one revoicing figure per pipe, foot lengths at the top).
+    const old = firstFormatRates as Record<string, unknown> & { norms: Record<string, number>; footLengthMm: object; cutUpFraction: number };
+    expect(ratesSchema.safeParse(old).success).toBe(false);
+    const changed = { ...old, cutUpFraction: 0.27, norms: { ...old.norms, voiceNewFluePipe: 0.61, revoicePipe: 0.4, cleanRetainedPipe: 0.13 } };
+    const r = parseRates(changed, DEFAULT_RATES);
+    if (!r.ok) throw new Error(r.messages.join("; "));
+    expect(Object.values(r.rates.cutUpByFamily)).toEqual(Array(7).fill(0.27));
+    for (const c of sizeClasses) {
+      expect(r.rates.norms.voiceNewFluePipe[c]).toBe(0.61);
+      expect(r.rates.norms.cleanPipe[c]).toBe(0.13);
+    }
+    expect(r.rates.norms.revoiceFluePipe).toBe(0.4);
+    expect(r.rates.norms.revoiceReedPipe).toBe(0.4);
+    expect(r.rates.pipeMetal.footLengthMm).toEqual(old.footLengthMm);
+    expect(r.rates.hourlyRate.voicing).toBe("72.00");
+    // What the first format had no figure for comes from the defaults.
+    expect(r.rates.items).toEqual(DEFAULT_RATES.items);
+    expect(r.rates.hourlyRate.casework).toBe(DEFAULT_RATES.hourlyRate.casework);
   });
 
   it("refuses rates that are not an object", () => {

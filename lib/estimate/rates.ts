@@ -249,7 +249,7 @@ export const ratesSchema = z.object({
   }),
   norms: normsSchema,
   programme: z.object({
-    hoursPerWeek: z.number().positive().max(80).meta({ title: "Paid hours per week", unit: "h" }),
+    hoursPerWeek: z.number().positive().max(80).meta({ title: "Paid hours per week", unit: "h/week" }),
     /** Share of paid hours that goes into the job (0–1]. */
     efficiency: z.number().gt(0).max(1).meta({ title: "Share of paid hours that goes into the job", unit: "×" }),
     crew: recordOf(departments, (d) => z.number().int().min(1).max(50).meta({ title: `Crew: ${d}`, unit: "people" })),
@@ -276,13 +276,51 @@ function mergeDeep(base: unknown, over: unknown): unknown {
 
 export type RatesResult = { ok: true; rates: Rates } | { ok: false; messages: string[] };
 
+/** A figure per pipe spread over the size classes, so a norm that became per size class keeps the firm's figure. */
+const perSizeClass = (v: unknown) => (typeof v === "number" ? Object.fromEntries(sizeClasses.map((c) => [c, v])) : v);
+
+/**
+ * Rates of the first format (saved before the pipe model was corrected) in this one, as
+ * `upgradeStop` does for stops: a value whose meaning is unchanged moves to its new place (foot
+ * lengths, the cut-up, cleaning and revoicing norms), and a per-pipe norm that became one per size
+ * class holds the firm's figure in every class. What the new model reads differently (sheet and board
+ * thickness by size class, a swell box per division, transport per trip) is not carried over: the
+ * demo default stands in until the firm enters its own. Anything else passes through untouched.
+ */
+export function upgradeRates(raw: unknown): unknown {
+  if (!isPlainObject(raw)) return raw;
+  const { footLengthMm, cutUpFraction, sheetThicknessMm: _sheet, boardThicknessMm: _board, ...r } = raw;
+  const out: Record<string, unknown> = { ...r };
+  if (isPlainObject(footLengthMm)) {
+    const pipeMetal = isPlainObject(r.pipeMetal) ? r.pipeMetal : {};
+    if (pipeMetal.footLengthMm === undefined) out.pipeMetal = { ...pipeMetal, footLengthMm };
+  }
+  if (typeof cutUpFraction === "number" && r.cutUpByFamily === undefined) out.cutUpByFamily = Object.fromEntries(families.map((f) => [f, cutUpFraction]));
+  if (isPlainObject(r.norms)) {
+    const { cleanRetainedPipe, revoicePipe, swellBoxPerDivision: _swell, transportPerTrip: _trip, transportPerThousandPipes: _perThousand, ...norms } = r.norms;
+    const n: Record<string, unknown> = { ...norms };
+    if (cleanRetainedPipe !== undefined && n.cleanPipe === undefined) n.cleanPipe = cleanRetainedPipe;
+    if (revoicePipe !== undefined) {
+      if (n.revoiceFluePipe === undefined) n.revoiceFluePipe = revoicePipe;
+      if (n.revoiceReedPipe === undefined) n.revoiceReedPipe = revoicePipe;
+    }
+    for (const [k, v] of Object.entries(n)) {
+      const shape = normsSchema.shape[k as keyof typeof normsSchema.shape];
+      if (shape && shape instanceof z.ZodObject && "over8" in shape.shape) n[k] = perSizeClass(v);
+    }
+    out.norms = n;
+  }
+  return out;
+}
+
 /**
  * Validates a firm's rates and norms. Any value left out is taken from `base` (e.g. the firm's
  * stored rates, or DEFAULT_RATES from demo-rates.ts), so a file may carry only what differs; alloy
- * compositions replace the base composition as a whole.
+ * compositions replace the base composition as a whole. Rates of the first format are upgraded first.
  */
-export function parseRates(input: unknown, base: Rates): RatesResult {
-  if (input !== undefined && !isPlainObject(input)) return { ok: false, messages: ["Rates: expected an object"] };
+export function parseRates(raw: unknown, base: Rates): RatesResult {
+  if (raw !== undefined && !isPlainObject(raw)) return { ok: false, messages: ["Rates: expected an object"] };
+  const input = upgradeRates(raw);
   const merged = isPlainObject(input) && isPlainObject(input.alloys)
     ? mergeDeep({ ...base, alloys: { ...base.alloys, ...input.alloys } }, { ...input, alloys: undefined })
     : mergeDeep(base, input);

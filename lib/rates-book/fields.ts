@@ -48,11 +48,17 @@ const KNOWN_LABELS: Readonly<Record<string, string>> = {
   taxPercent: "Tax",
   alloys: "Pipe-metal alloys (weight fractions)",
   woodDensityKgM3: "Timber densities",
-  sheetThicknessMm: "Sheet thickness of metal pipes",
-  boardThicknessMm: "Board thickness of wooden pipes",
   footLengthMm: "Foot length of metal pipes",
-  cutUpFraction: "Cut-up (mouth height ÷ mouth width)",
   chest: "Windchest rules",
+  items: "Bought-in items and site costs",
+  pipeMetal: "Metal pipes: sheet, foot and allowances",
+  woodPipes: "Wooden pipes: boards, blocks, caps and stoppers",
+  cutUpByFamily: "Cut-up by family (mouth height ÷ mouth width)",
+  wind: "Wind system",
+  swellBox: "Swell boxes",
+  case: "Case",
+  site: "Site and transport",
+  thicknessFactor: "Thickness factor by metal",
   wiring: "Wiring",
   norms: "Labour norms",
   programme: "Programme",
@@ -87,15 +93,29 @@ export function labelOf(key: string): string {
   return KNOWN_LABELS[key] ?? humanize(key);
 }
 
+/**
+ * A field's or group's words: the known label, else the schema's own title (`.meta({ title })`),
+ * else its name. A title that only repeats the key after a colon ("Crew: voicing") was made for a
+ * record's entry, and the known label or the name reads better.
+ */
+function labelFor(key: string, meta: Record<string, unknown> | undefined): string {
+  const title = typeof meta?.title === "string" ? meta.title : undefined;
+  if (KNOWN_LABELS[key] || !title || title.endsWith(`: ${key}`)) return labelOf(key);
+  return title;
+}
+
 /** The unit of a leaf, from the schema's own metadata when it gives one, else from the names on its path. */
 function unitOf(path: readonly string[], kind: FieldKind, meta: Record<string, unknown> | undefined): string {
-  if (typeof meta?.unit === "string") return meta.unit;
   const names = path.join(".");
   const last = path[path.length - 1] ?? "";
   const has = (re: RegExp) => path.some((p) => re.test(p));
   if (has(/^hourlyRate$/)) return "{currency}/h";
   const per = names.match(/PricePer(Kg|M3|M)\b/);
   if (per) return `{currency}/${per[1] === "Kg" ? "kg" : per[1] === "M3" ? "m³" : "m"}`;
+  if (typeof meta?.unit === "string") {
+    // An amount's unit says what it is per ("per load", "each"): the set's currency goes before it.
+    return kind === "decimal" && meta.unit !== "%" && meta.unit !== "" ? `{currency} ${meta.unit}` : meta.unit;
+  }
   if (/Percent$/.test(last)) return "%";
   if (has(/KgM3$/)) return "kg/m³";
   if (has(/Mm$/)) return "mm";
@@ -183,7 +203,7 @@ function leaf(path: string[], groupLabels: string[], s: z.ZodType, optional: boo
   }
   const description = typeof meta?.description === "string" ? meta.description : undefined;
   return {
-    key: path.join("."), path, label: labelOf(path[path.length - 1]!), groupLabels, unit: unitOf(path, kind, meta),
+    key: path.join("."), path, label: labelFor(path[path.length - 1]!, meta), groupLabels, unit: unitOf(path, kind, meta),
     ...(description ? { description } : {}), kind, optional, ...(min ? { min } : {}), ...(max ? { max } : {}), ...(options ? { options } : {}),
   };
 }
@@ -193,7 +213,7 @@ function walk(s: z.ZodType, path: string[], groupLabels: string[]): RateNode {
   const def = defOf(inner);
   if (def.type === "object") {
     const shape = def.shape as Record<string, z.ZodType>;
-    const label = path.length ? labelOf(path[path.length - 1]!) : "Rates";
+    const label = path.length ? labelFor(path[path.length - 1]!, meta) : "Rates";
     const labels = path.length ? [...groupLabels, label] : groupLabels;
     return {
       type: "group", key: path.join("."), label, ...(typeof meta?.description === "string" ? { description: meta.description } : {}),
@@ -203,7 +223,7 @@ function walk(s: z.ZodType, path: string[], groupLabels: string[]): RateNode {
   if (def.type === "record") {
     const keys = recordKeys(def);
     if (!keys) throw new Error(`The rate book cannot lay out a record without a fixed list of keys at "${path.join(".")}".`);
-    const label = labelOf(path[path.length - 1]!);
+    const label = labelFor(path[path.length - 1]!, meta);
     return { type: "group", key: path.join("."), label, children: keys.map((k) => walk(def.valueType as z.ZodType, [...path, k], [...groupLabels, label])) };
   }
   return { type: "field", field: leaf(path, groupLabels, inner, optional, meta) };

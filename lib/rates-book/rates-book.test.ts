@@ -29,8 +29,11 @@ describe("the rate book's fields come from the estimator's schema", () => {
     expect(f("metalPricePerKg.spotted")).toMatchObject({ kind: "decimal", unit: "{currency}/kg" });
     expect(f("programme.crew.voicing")).toMatchObject({ kind: "integer", min: { value: 1, inclusive: true }, max: { value: 50, inclusive: true }, unit: "people" });
     expect(f("programme.efficiency")).toMatchObject({ kind: "number", min: { value: 0, inclusive: false }, max: { value: 1, inclusive: true } });
-    expect(f("norms.newMetalPipe.2to4")).toMatchObject({ kind: "number", unit: "h", label: "2–4 ft", groupLabels: ["Labour norms", "New metal pipe"] });
-    expect(f("sheetThicknessMm.over8").unit).toBe("mm");
+    expect(f("norms.newMetalPipe.2to4")).toMatchObject({ kind: "number", unit: "h", label: "2–4 ft", groupLabels: ["Labour norms", "New metal flue pipe"] });
+    expect(f("pipeMetal.footLengthMm.over8").unit).toBe("mm");
+    // Labels and units from the schema's own metadata: an amount per unit carries the set's currency.
+    expect(f("items.vehiclePerLoad")).toMatchObject({ kind: "decimal", unit: "{currency} per load", label: "Vehicle, fixed part" });
+    expect(f("norms.relocatePipe")).toMatchObject({ unit: "h", label: "Relocating an existing pipe" });
     expect(f("overheadPercent").unit).toBe("%");
     expect(f("currency").kind).toBe("text");
     expect(f("alloys.spotted.tin")).toMatchObject({ optional: true });
@@ -64,7 +67,7 @@ describe("checking rate values", () => {
     expect(r.problems["hourlyRate.voicing"]).toEqual([`Hourly rates by department — Voicing "seventy" is not an amount: write it as digits with a decimal point, e.g. 62.50.`]);
     expect(r.problems["programme.efficiency"]![0]).toMatch(/Programme — Efficiency .* must be more than 0 and at most 1\./);
     expect(r.problems["programme.crew.voicing"]![0]).toMatch(/must be a whole number/);
-    expect(r.problems["norms.relocatePipe"]![0]).toMatch(/Labour norms — Relocate pipe must be at least 0\./);
+    expect(r.problems["norms.relocatePipe"]![0]).toMatch(/Labour norms — Relocating an existing pipe must be at least 0\./);
     expect(r.problems["alloys.zinc.tin"] ?? r.problems["alloys.zinc.zinc"]).toBeDefined();
     expect(JSON.stringify(r.problems)).toMatch(/weight fractions must add up to 1/);
     expect(r.problems.currency![0]).toMatch(/"EUO" is not a known ISO 4217 currency code/);
@@ -130,7 +133,7 @@ describe("CSV export and import", () => {
       expect.stringMatching(/^Row \d+ repeats "hourlyRate.erection" \(first on row \d+\)\.$/),
       expect.stringMatching(/^Row \d+: no rate is called "no.such.rate"\.$/),
     ]));
-    expect(r.fileProblems).toEqual([`The file has no row for "norms.relocatePipe" (Labour norms — Relocate pipe).`]);
+    expect(r.fileProblems).toEqual([`The file has no row for "norms.relocatePipe" (Labour norms — Relocating an existing pipe).`]);
   });
 
   it("refuses a file without key and value columns, and an empty file", () => {

@@ -2,6 +2,7 @@ import { randomUUID } from "node:crypto";
 import Papa from "papaparse";
 import { afterAll, describe, expect, it } from "vitest";
 import { api, baseUrl, closeTestDb, makeUser, signIn, testDb } from "../support/server";
+import firstFormatRates from "../../lib/estimate/test-support/first-format-rates.json";
 
 afterAll(closeTestDb);
 
@@ -111,12 +112,24 @@ describe("the rate book", () => {
     const cookie = await signIn(await makeUser("estimator"));
     const set = await newSet(cookie);
     // As if saved by an older Stopwright: one nested norm and one top-level rate are not in the stored JSON.
-    await testDb().query("update rate_set_versions set rates = (rates #- '{norms,relocatePipe}') - 'cutUpFraction' where rate_set_id = $1", [set.set.id]);
+    await testDb().query("update rate_set_versions set rates = (rates #- '{norms,relocatePipe}') - 'cutUpByFamily' where rate_set_id = $1", [set.set.id]);
     const read = await api(`/api/rate-sets/${set.set.id}`, { cookie });
     expect(read.status).toBe(200);
     expect(read.json.current.rates.norms.relocatePipe).toBe(set.current.rates.norms.relocatePipe);
-    expect(read.json.current.rates.cutUpFraction).toBe(set.current.rates.cutUpFraction);
+    expect(read.json.current.rates.cutUpByFamily).toEqual(set.current.rates.cutUpByFamily);
     expect(read.json.current.rates.hourlyRate).toEqual(set.current.rates.hourlyRate);
+  });
+
+  it("reads a version stored in the first rates format (one cut-up, per-pipe voicing norms), keeping its figures", async () => {
+    const cookie = await signIn(await makeUser("estimator"));
+    const set = await newSet(cookie);
+    const old = { ...firstFormatRates, cutUpFraction: 0.28, hourlyRate: { ...firstFormatRates.hourlyRate, voicing: "77.00" } };
+    await testDb().query("update rate_set_versions set rates = $2::jsonb where rate_set_id = $1", [set.set.id, JSON.stringify(old)]);
+    const read = await api(`/api/rate-sets/${set.set.id}`, { cookie });
+    expect(read.status).toBe(200);
+    expect(read.json.current.rates.hourlyRate.voicing).toBe("77.00");
+    expect(read.json.current.rates.cutUpByFamily.flute).toBe(0.28);
+    expect(read.json.current.rates.norms.voiceNewFluePipe.over8).toBe(firstFormatRates.norms.voiceNewFluePipe);
   });
 
   it("is for estimators and administrators only", async () => {
