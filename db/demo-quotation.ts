@@ -15,11 +15,12 @@ export const demoCommercial: Commercial = {
   introduction:
     "Thank you for asking us to tender for the restoration of the organ at St Aldric's. Scheme A keeps the instrument as its builder left it in 1908: every stop is restored and regulated, the tired pneumatic action is converted to electro-pneumatic, and the console is restored with a modest combination system. (Invented demo tender.)",
   startDate: "2027-09-06",
+  // Only what the estimate does not price itself: it prices the case, the wind system with the new blower, scaffolding and transport.
   lumpSums: [
-    { id: "scaffold", category: "scaffolding", description: "Scaffold to the west gallery, erected and struck", quantity: "8", unit: "week", unitPrice: "420.00" },
-    { id: "case", category: "case", description: "Repairs to the oak case and re-gilding of the front pipes", quantity: "1", unit: "item", unitPrice: "14250.00" },
+    { id: "store", category: "transport", description: "Dry storage of the dismantled organ while the church roof is repaired", quantity: "12", unit: "week", unitPrice: "160.00" },
+    { id: "stencil", category: "decoration", description: "Restoring the stencilled patterns on the front pipes", quantity: "1", unit: "item", unitPrice: "6850.00" },
   ],
-  provisionalSums: [{ id: "blower", description: "Overhaul of the blower, or its renewal if the inspection finds the motor beyond repair", amount: "5800.00" }],
+  provisionalSums: [{ id: "woodworm", description: "Replacing wooden pipes found beyond repair when the chests are opened", amount: "5800.00" }],
   options: [
     { id: "cymbelstern", title: "Cymbelstern", description: "A star of eight tuned bells on the case, from a drawstop", price: "4650.00" },
     { id: "trumpet", title: "Trumpet 8′ on the Swell", description: "A new Trumpet on the existing spare slide", price: "18900.00" },

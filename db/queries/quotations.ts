@@ -5,7 +5,7 @@ import { quotations, quoteCounters, schemeRevisions, schemes, users, type Projec
 import { commercialSchema, defaultCommercial, type Commercial } from "@/lib/quote/commercial";
 import { listsQuotation, maySeeTotal } from "@/lib/quote/access";
 import {
-  addDays, buildQuotation, effectiveStatus, formatQuoteNumber, QuotationError, type Quotation, type QuoteStatus,
+  addDays, buildQuotation, readQuotationSnapshot, effectiveStatus, formatQuoteNumber, QuotationError, type Quotation, type QuoteStatus,
 } from "@/lib/quote/quotation";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
@@ -113,7 +113,7 @@ function summaryOf(row: QuotationRow, q: Quotation | null, schemeName: string, u
 
 async function toRead(row: QuotationRow, project: Project, user: SessionUser): Promise<QuotationRead> {
   if (row.snapshot) {
-    const q = row.snapshot as Quotation;
+    const q = readQuotationSnapshot(row.snapshot);
     return {
       ...summaryOf(row, q, q.scheme.name, user), version: row.version, projectId: row.projectId,
       rateSetId: null, rateSetName: q.rateSet.name, rateSetVersion: q.rateSet.version, quotation: q,

@@ -5,9 +5,9 @@
  */
 import type { FileChild } from "docx";
 import { departmentLabels } from "@/lib/estimate";
-import { pitchText, treatmentLabels } from "@/components/spec/format";
+import { dispositionText, pitchText } from "@/components/spec/format";
 import { formatLongDate, weeksText } from "@/lib/quote/programme-chart";
-import type { Quotation } from "@/lib/quote/quotation";
+import { hasWorkParts, type Quotation } from "@/lib/quote/quotation";
 import type { DocumentFonts } from "./assets";
 import { CLASH, formatCount, heading, houseDocument, moneyCell, para, run, SANS, table, TIN, type Cell } from "./common";
 
@@ -24,6 +24,7 @@ export function costSheetDocument(q: Quotation, fonts: DocumentFonts) {
   body.push(table(["", "Amount"], [
     ["Labour", moneyCell(m.labourAmount, cur)],
     ["Materials", moneyCell(m.materialsAmount, cur)],
+    ...(m.items.length ? [["Bought-in items and site costs", moneyCell(m.itemsAmount, cur)] as Cell[]] : []),
     [{ text: "Direct cost", bold: true }, moneyCell(m.subtotalAmount, cur, { bold: true })],
     [`Overheads ${m.overhead.percent} % of direct cost`, moneyCell(m.overhead.amount, cur)],
     [`Contingency ${m.contingency.percent} %`, moneyCell(m.contingency.amount, cur)],
@@ -53,7 +54,7 @@ export function costSheetDocument(q: Quotation, fonts: DocumentFonts) {
       { text: used.filter((k) => d.hours[k] > 0).sort((a, b) => d.hours[b] - d.hours[a]).slice(0, 3).map((k) => `${departmentLabels[k]} ${formatCount(d.hours[k], 1)}`).join("; "), color: TIN },
       moneyCell(d.directCostAmount, cur),
     ]),
-    ["Console, wiring and transport", { text: formatCount(e.schemeWide.hoursTotal, 1), align: "right" }, { text: used.filter((k) => e.schemeWide.hours[k] > 0).map((k) => `${departmentLabels[k]} ${formatCount(e.schemeWide.hours[k], 1)}`).join("; "), color: TIN }, moneyCell(e.schemeWide.directCostAmount, cur)],
+    [hasWorkParts(e) ? "The organ as a whole (wind, case, console, site, design)" : "Console, wiring and transport", { text: formatCount(e.schemeWide.hoursTotal, 1), align: "right" }, { text: used.filter((k) => e.schemeWide.hours[k] > 0).map((k) => `${departmentLabels[k]} ${formatCount(e.schemeWide.hours[k], 1)}`).join("; "), color: TIN }, moneyCell(e.schemeWide.directCostAmount, cur)],
     [{ text: "All divisions", bold: true }, { text: formatCount(e.totals.hoursTotal, 1), align: "right", bold: true }, "", moneyCell(m.subtotalAmount, cur, { bold: true })],
   ], [0.22, 0.12, 0.44, 0.22], { total: true, fontSize: 16 }));
 
@@ -62,7 +63,7 @@ export function costSheetDocument(q: Quotation, fonts: DocumentFonts) {
   for (const d of e.divisions) {
     for (const s of d.stops) {
       if (!s.pipeHours && !s.pipes.total) continue;
-      rankRows.push([d.name, `${s.name} ${pitchText({ footage: s.footage, ranks: s.ranks, family: q.scheme.document.divisions.find((x) => x.id === d.id)?.stops.find((x) => x.id === s.id)?.family ?? "" })}`, treatmentLabels[s.treatment], { text: formatCount(s.pipes.new), align: "right" }, { text: formatCount(s.pipes.reused + s.pipes.restored), align: "right" }, { text: s.metalKg ? formatCount(s.metalKg, 1) : "", align: "right" }, { text: formatCount(s.pipeHours, 1), align: "right" }]);
+      rankRows.push([d.name, `${s.name} ${pitchText({ footage: s.footage, ranks: s.ranks, family: q.scheme.document.divisions.find((x) => x.id === d.id)?.stops.find((x) => x.id === s.id)?.family ?? "" })}`, dispositionText(s), { text: formatCount(s.pipes.new), align: "right" }, { text: formatCount(s.pipes.reused + s.pipes.restored), align: "right" }, { text: s.metalKg ? formatCount(s.metalKg, 1) : "", align: "right" }, { text: formatCount(s.pipeHours, 1), align: "right" }]);
     }
   }
   body.push(table(["Division", "Stop", "Work", "New pipes", "Existing", "Metal kg", "Hours"], rankRows, [0.13, 0.3, 0.13, 0.11, 0.11, 0.11, 0.11], { fontSize: 15 }));
@@ -72,6 +73,22 @@ export function costSheetDocument(q: Quotation, fonts: DocumentFonts) {
     ...m.materials.map((x): Cell[] => [x.label, { text: `${formatCount(x.quantity, x.unit === "m3" ? 3 : x.unit === "m" ? 0 : 1)} ${x.unit === "m3" ? "m³" : x.unit}`, align: "right" }, moneyCell(x.priceAmount, cur), moneyCell(x.amount, cur)]),
     [{ text: "Materials", bold: true }, "", "", moneyCell(m.materialsAmount, cur, { bold: true })],
   ], [0.4, 0.2, 0.18, 0.22], { total: true }));
+
+  if (m.items.length) {
+    body.push(heading("Bought-in items and site costs", 2));
+    body.push(table(["Item", "Quantity", "Price", "Amount"], [
+      ...m.items.map((x): Cell[] => [x.label, { text: `${formatCount(x.quantity, Number.isInteger(x.quantity) ? 0 : 1)} ${x.unit.replace(/^per /, "")}`, align: "right" }, moneyCell(x.priceAmount, cur), moneyCell(x.amount, cur)]),
+      [{ text: "Bought-in items and site costs", bold: true }, "", "", moneyCell(m.itemsAmount, cur, { bold: true })],
+    ], [0.4, 0.2, 0.18, 0.22], { total: true, fontSize: 16 }));
+  }
+
+  if (hasWorkParts(e)) {
+    body.push(heading("Direct cost by part of the work", 2));
+    body.push(table(["Part of the work", "Hours", "Direct cost"], [
+      ...m.byPackage.map((p): Cell[] => [p.label, { text: formatCount(e.packages.find((x) => x.package === p.package)?.hoursTotal ?? 0, 1), align: "right" }, moneyCell(p.directCostAmount, cur)]),
+      [{ text: "Direct cost", bold: true }, { text: formatCount(e.totals.hoursTotal, 1), align: "right", bold: true }, moneyCell(m.subtotalAmount, cur, { bold: true })],
+    ], [0.5, 0.2, 0.3], { total: true }));
+  }
 
   body.push(heading("Programme", 2));
   body.push(table(["Phase", "Weeks", "Set by"], e.programme.phases.map((p): Cell[] => [p.label, { text: weeksText(p.weeks), align: "right" }, p.setBy ? departmentLabels[p.setBy] : ""]), [0.4, 0.2, 0.4]));

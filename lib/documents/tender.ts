@@ -7,11 +7,11 @@
  */
 import { AlignmentType, ImageRun, PageBreak, Paragraph, type FileChild } from "docx";
 import {
-  actionLabels, chestTypeLabels, compassText, couplerName, pitchText, treatmentLabels, windText, workLabels,
+  actionLabels, chestTypeLabels, compassText, couplerName, dispositionMark, dispositionText, pitchText, windText, workLabels, type DispositionMark,
 } from "@/components/spec/format";
 import { programmeWords, formatLongDate, weeksText } from "@/lib/quote/programme-chart";
 import { taxTreatmentLabels } from "@/lib/quote/commercial";
-import type { Quotation } from "@/lib/quote/quotation";
+import { hasWorkParts, type Quotation } from "@/lib/quote/quotation";
 import type { DocumentFonts } from "./assets";
 import {
   brassRule, bullet, coverTitle, signatureLine, currencyPrefix, formatCount, formatMoney, heading, houseDocument, moneyCell, para, run, SANS, spacer, table, TIN, SOFT, BRASS, CLASH,
@@ -112,17 +112,17 @@ function specification(q: Quotation, no: Map<string, number>): FileChild[] {
     const rows: Cell[][] = d.stops.map((s) => {
       const note: string[] = [];
       if (s.compass) note.push(`from ${compassText(s.compass).split("–")[0]}`);
-      if (s.source && no.has(s.source)) note.push(s.treatment === "extension" ? `extension of no. ${no.get(s.source)}` : `from no. ${no.get(s.source)}`);
+      if (s.source && no.has(s.source)) note.push(s.origin === "extension" ? `extension of no. ${no.get(s.source)}` : `from no. ${no.get(s.source)}`);
       const sp = e?.stops.find((x) => x.id === s.id);
       return [
         { text: `${no.get(s.id)}.`, align: "right", color: TIN },
-        { text: `${s.name}${note.length ? ` (${note.join("; ")})` : ""}`, strike: s.treatment === "removed" },
+        { text: `${s.name}${note.length ? ` (${note.join("; ")})` : ""}`, strike: s.origin === "removed" },
         { text: pitchText(s), align: "right" },
-        { text: treatmentLabels[s.treatment], color: SOFT },
+        { text: dispositionText(s), color: SOFT },
         { text: sp ? formatCount(sp.pipes.total + sp.pipes.prepared) : "", align: "right" },
       ];
     });
-    if (e) rows.push([{ text: "" }, { text: `${d.name}: ${e.stops.filter((s) => s.treatment !== "removed").length} stops`, bold: true }, { text: "" }, { text: "pipes", color: TIN }, { text: formatCount(e.pipes.total), align: "right", bold: true }]);
+    if (e) rows.push([{ text: "" }, { text: `${d.name}: ${e.stops.filter((s) => s.origin !== "removed").length} stops`, bold: true }, { text: "" }, { text: "pipes", color: TIN }, { text: formatCount(e.pipes.total), align: "right", bold: true }]);
     out.push(table(["No.", "Stop", "Pitch", "Work", "Pipes"], rows, [0.07, 0.5, 0.11, 0.19, 0.13], { total: !!e, fontSize: 18 }));
   }
   const acc = doc.accessories;
@@ -156,29 +156,62 @@ function specification(q: Quotation, no: Map<string, number>): FileChild[] {
   return out;
 }
 
-const SCOPE_ORDER = [
+const SCOPE_ORDER: readonly (readonly [DispositionMark, string])[] = [
   ["new", "New stops, made in our workshop"],
   ["restored", "Existing stops to be restored"],
   ["revoiced", "Existing stops to be revoiced"],
   ["relocated", "Existing stops to be moved"],
+  ["rescaled", "Existing stops to be re-scaled"],
   ["retained", "Existing stops kept as they are, cleaned and regulated"],
-  ["extension", "Extensions (new pipes added to an existing rank)"],
+  ["extension", "Extensions (pipes added to an existing rank)"],
   ["borrowed", "Stops borrowed from another division (no pipes)"],
   ["prepared", "Prepared for (space, wind and wiring now, pipes later)"],
   ["removed", "Stops to be removed"],
-] as const;
+];
+
+/** The organ's own parts of the work, as the estimate priced them: only those it has a cost for. */
+function organParts(q: Quotation): string[] {
+  const e = q.estimate;
+  if (!hasWorkParts(e)) return [];
+  const priced = new Set(e.money.byPackage.filter((p) => p.directCostAmount !== "0.00").map((p) => p.package));
+  const doc = q.scheme.document;
+  const out: string[] = [];
+  if (priced.has("wind")) {
+    const reservoirs = e.wind.reservoirs.length;
+    out.push(
+      `Wind system ${workLabels[doc.wind.work].toLowerCase()}: ${doc.wind.blower === "new" ? `a new blower of about ${formatCount(e.wind.blowerM3PerMin, 1)} m³/min at ${formatCount(e.wind.blowerPressureMm)} mm water column (${formatCount(e.wind.blowerKw, 1)} kW)` : "the existing blower kept"}` +
+        `, ${reservoirs} reservoir${reservoirs === 1 ? "" : "s"} (one for each wind pressure), trunking${doc.accessories.tremulants.length ? " and tremulants" : ""}.`,
+    );
+  }
+  if (priced.has("swellBoxes")) out.push("Swell boxes with their shutters and swell mechanism.");
+  if (priced.has("case") && doc.case.work !== "none") {
+    const c = e.case;
+    const front = [c.frontPipes ? `${formatCount(c.frontPipes)} speaking front pipes polished` : "", c.dummyPipes ? `${formatCount(c.dummyPipes)} new display pipes` : "", doc.case.decorationM2 ? "carved decoration" : "", doc.case.gildingM2 ? "gilding" : ""].filter(Boolean);
+    out.push(`Case ${workLabels[doc.case.work].toLowerCase()}, about ${formatCount(c.widthMm)} mm wide, ${formatCount(c.depthMm)} mm deep and ${formatCount(c.heightMm)} mm high${front.length ? `; ${front.join(", ")}` : ""}.`);
+  }
+  if (priced.has("site")) {
+    const t = e.site.transport;
+    const time = e.site.time;
+    const parts = [`${t.loadsOut + t.loadsIn} load${t.loadsOut + t.loadsIn === 1 ? "" : "s"} by road over ${formatCount(t.distanceKm)} km`, time.scaffold ? "scaffolding and access for the work on site" : "", `about ${weeksText(time.weeks)} on site${time.lodging ? ", the crew lodging near the building" : ""}`].filter(Boolean);
+    out.push(`Site: ${parts.join("; ")}.`);
+  }
+  if (priced.has("design")) out.push("Design, drawings and management of the project.");
+  return out;
+}
 
 function scopeOfWorks(q: Quotation): FileChild[] {
   const out: FileChild[] = [heading("2. Scope of works")];
   out.push(para("What happens to every stop, as the specification above gives it. Pipe counts are those of the finished organ."));
   const est = new Map(q.estimate.divisions.flatMap((d) => d.stops.map((s) => [`${d.id}/${s.id}`, s] as const)));
-  for (const [treatment, title] of SCOPE_ORDER) {
-    const items = q.scheme.document.divisions.flatMap((d) => d.stops.filter((s) => s.treatment === treatment).map((s) => ({ d, s, e: est.get(`${d.id}/${s.id}`) })));
+  for (const [mark, title] of SCOPE_ORDER) {
+    const items = q.scheme.document.divisions.flatMap((d) => d.stops.filter((s) => dispositionMark(s) === mark).map((s) => ({ d, s, e: est.get(`${d.id}/${s.id}`) })));
     if (!items.length) continue;
     out.push(heading(title, 3));
     for (const { d, s, e } of items) {
-      const pipes = e ? (treatment === "new" || treatment === "extension" ? e.pipes.new : treatment === "removed" ? e.pipes.removed : treatment === "prepared" ? e.pipes.prepared : e.pipes.total) : 0;
-      out.push(bullet([run(`${d.name}: `, { color: SOFT }), run(`${s.name} ${pitchText(s)}`), run(pipes ? ` — ${formatCount(pipes)} pipes` : "", { color: SOFT })]));
+      const pipes = e ? (mark === "new" || mark === "extension" ? e.pipes.new || e.pipes.total : mark === "removed" ? e.pipes.removed : mark === "prepared" ? e.pipes.prepared : e.pipes.total) : 0;
+      // A stop with more than one kind of work says all of them ("Existing: restored, revoiced").
+      const more = s.origin === "existing" && s.work.length > 1 ? ` (${dispositionText(s).replace(/^Existing: /, "")})` : "";
+      out.push(bullet([run(`${d.name}: `, { color: SOFT }), run(`${s.name} ${pitchText(s)}${more}`), run(pipes ? ` — ${formatCount(pipes)} pipes` : "", { color: SOFT })]));
     }
   }
   out.push(heading("Windchests, action and console", 3));
@@ -187,6 +220,11 @@ function scopeOfWorks(q: Quotation): FileChild[] {
   }
   out.push(bullet(`Console ${workLabels[q.scheme.document.accessories.consoleWork].toLowerCase()}.`));
   out.push(bullet("Dismantling and packing, transport to and from our workshop, erection in the building, and tonal finishing on site."));
+  const parts = organParts(q);
+  if (parts.length) {
+    out.push(heading("Wind, case, site and design", 3));
+    for (const p of parts) out.push(bullet(p));
+  }
   return out;
 }
 

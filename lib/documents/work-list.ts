@@ -6,7 +6,7 @@
  */
 import type { FileChild } from "docx";
 import { departmentLabels, type StopEstimate } from "@/lib/estimate";
-import { materialLabels, pitchText, treatmentLabels } from "@/components/spec/format";
+import { dispositionText, materialLabels, pitchText } from "@/components/spec/format";
 import { weeksText } from "@/lib/quote/programme-chart";
 import type { Quotation } from "@/lib/quote/quotation";
 import type { DocumentFonts } from "./assets";
@@ -29,7 +29,7 @@ const GROUPS = [
   "New reeds (metal pipe shop resonators, reed making)",
   "Restoration",
   "Revoicing",
-  "Moving and re-erecting",
+  "Moving, re-erecting and re-scaling",
 ] as const;
 
 /** The ranks the shop works on, grouped and in the order it takes them. Pure, for the document and its test. */
@@ -39,7 +39,7 @@ export function workItems(q: Quotation): WorkItem[] {
   // An extension's new pipes are made like its rank's: follow the sources to the stop that owns the rank.
   const rootOf = (id: string) => {
     let s = byId.get(id);
-    for (let i = 0; s && (s.treatment === "extension" || s.treatment === "borrowed") && s.source && i < 16; i++) s = byId.get(s.source) ?? s;
+    for (let i = 0; s && (s.origin === "extension" || s.origin === "borrowed") && s.source && i < 16; i++) s = byId.get(s.source) ?? s;
     return s;
   };
   for (const d of q.estimate.divisions) {
@@ -48,13 +48,14 @@ export function workItems(q: Quotation): WorkItem[] {
       const own = doc?.stops.find((x) => x.id === s.id);
       const src = own ? rootOf(own.id) : undefined;
       if (!own || !src) continue;
-      const reed = src.family === "reed" || src.construction.startsWith("reed");
+      const reed = src.family === "reed" || src.construction === "reed";
       const wood = WOODS.has(src.material);
+      // The shop's first task on the rank decides its group: making new pipes, then restoring, revoicing, moving or re-scaling.
       let group: number;
-      if ((s.treatment === "new" || s.treatment === "extension") && s.pipes.new > 0) group = reed ? 2 : wood ? 1 : 0;
-      else if (s.treatment === "restored") group = 3;
-      else if (s.treatment === "revoiced") group = 4;
-      else if (s.treatment === "relocated") group = 5;
+      if ((s.origin === "new" || s.origin === "extension") && s.pipes.new > 0) group = reed ? 2 : wood ? 1 : 0;
+      else if (s.work.includes("restored")) group = 3;
+      else if (s.work.includes("revoiced")) group = 4;
+      else if (s.work.includes("relocated") || s.work.includes("rescaled")) group = 5;
       else continue;
       items.push({ group: GROUPS[group]!, division: d.name, stop: s, pitch: pitchText(own), material: materialLabels[src.material], family: src.family, order: group });
     }
@@ -78,8 +79,8 @@ export function workListDocument(q: Quotation, fonts: DocumentFonts) {
       { text: `${++n}.`, align: "right", color: TIN },
       i.division,
       `${i.stop.name} ${i.pitch}`,
-      treatmentLabels[i.stop.treatment],
-      { text: formatCount(i.stop.treatment === "restored" ? i.stop.pipes.restored : i.stop.treatment === "new" || i.stop.treatment === "extension" ? i.stop.pipes.new : i.stop.pipes.reused), align: "right" },
+      dispositionText(i.stop),
+      { text: formatCount(i.group === GROUPS[3] ? i.stop.pipes.restored : i.stop.origin === "new" || i.stop.origin === "extension" ? i.stop.pipes.new : i.stop.pipes.reused), align: "right" },
       i.material,
       { text: i.stop.metalKg ? `${formatCount(i.stop.metalKg, 1)} kg` : i.stop.woodM3 ? `${formatCount(i.stop.woodM3, 3)} m³` : "", align: "right" },
       { text: formatCount(i.stop.pipeHours, 1), align: "right" },

@@ -65,7 +65,7 @@ describe("rates and norms", () => {
 
   it("reads a rate set of the first format, keeping the firm's figures where their meaning is unchanged", () => {
     // The first format's demo set as it was stored (one cut-up, one flue-voicing and one revoicing figure per pipe, foot lengths at the top).
-    const old = firstFormatRates as Record<string, unknown> & { norms: Record<string, number>; footLengthMm: object; cutUpFraction: number };
+    const old = firstFormatRates;
     expect(ratesSchema.safeParse(old).success).toBe(false);
     const changed = { ...old, cutUpFraction: 0.27, norms: { ...old.norms, voiceNewFluePipe: 0.61, revoicePipe: 0.4, cleanRetainedPipe: 0.13 } };
     const r = parseRates(changed, DEFAULT_RATES);

@@ -144,6 +144,11 @@ const LEGACY_TREATMENT: Readonly<Record<string, { origin: (typeof origins)[numbe
   removed: { origin: "removed", work: [] },
 };
 
+/** The origin and work a first-format `treatment` word stands for; undefined for a word that format never had. */
+export function fromTreatment(treatment: unknown): { origin: (typeof origins)[number]; work: (typeof pipeWorks)[number][] } | undefined {
+  return typeof treatment === "string" && Object.hasOwn(LEGACY_TREATMENT, treatment) ? LEGACY_TREATMENT[treatment] : undefined;
+}
+
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
 
 /**
@@ -166,7 +171,7 @@ export function upgradeStop(raw: unknown): unknown {
   let s: Record<string, unknown> = raw;
   if ("treatment" in s && s.origin === undefined) {
     const { treatment, ...rest } = s;
-    const t = typeof treatment === "string" ? LEGACY_TREATMENT[treatment] : undefined;
+    const t = fromTreatment(treatment);
     s = t ? { ...rest, origin: t.origin, work: t.work } : { ...rest, origin: treatment };
   }
   if (s.construction === "reed-full") s = { ...s, construction: "reed", resonator: isRecord(s.resonator) ? s.resonator : { length: "full", shape: "conical" } };

@@ -13,11 +13,12 @@ export function exampleCommercial(currency = "EUR"): Commercial {
     ...defaultCommercial({ currency, taxPercent: DEFAULT_RATES.taxPercent }),
     startDate: "2028-03-06",
     introduction: "",
+    // Work the estimate does not price itself (it prices the case, wind system, scaffolding and transport).
     lumpSums: [
-      { id: "scaffold", category: "scaffolding", description: "Scaffold to the gallery front, erected and struck", quantity: "6", unit: "week", unitPrice: "480.00" },
-      { id: "case", category: "case", description: "New oak case front with carved pipe shades", quantity: "1", unit: "item", unitPrice: "38500.00" },
+      { id: "store", category: "transport", description: "Dry storage of the dismantled organ while the hall is refurbished", quantity: "10", unit: "week", unitPrice: "180.00" },
+      { id: "stencil", category: "decoration", description: "Stencilled patterns on the front pipes, restored", quantity: "1", unit: "item", unitPrice: "7400.00" },
     ],
-    provisionalSums: [{ id: "blower", description: "Overhaul or renewal of the blower, once inspected", amount: "6500.00" }],
+    provisionalSums: [{ id: "woodworm", description: "Replacing wooden pipes found beyond repair when the chests are opened", amount: "6500.00" }],
     options: [
       { id: "cymbel", title: "Cymbelstern", description: "Twelve tuned bells on a star, from a drawstop", price: "4850.00" },
       { id: "trumpet", title: "Prepared-for Trumpet 8′ completed", description: "Make and voice the prepared Trumpet now", price: "21400.00" },
@@ -27,8 +28,12 @@ export function exampleCommercial(currency = "EUR"): Commercial {
 }
 
 /** A quotation of a scheme file's document (tuning and programme dates from the file). */
-export function exampleQuotation(schemeFile: { name: string; tuning?: { pitchHz: number; temperatureC: number }; programme?: { start: string; target?: string }; divisions: unknown; accessories?: unknown }, overrides: Partial<Commercial> = {}): Quotation {
-  const document = schemeDocumentSchema.parse({ name: schemeFile.name, description: "", divisions: schemeFile.divisions, accessories: schemeFile.accessories });
+export function exampleQuotation(
+  schemeFile: { name: string; tuning?: { pitchHz: number; temperatureC: number }; programme?: { start: string; target?: string }; divisions: unknown; accessories?: unknown; case?: unknown; wind?: unknown; site?: unknown },
+  overrides: Partial<Commercial> = {},
+): Quotation {
+  const { case: caseWork, wind, site } = schemeFile;
+  const document = schemeDocumentSchema.parse({ name: schemeFile.name, description: "", divisions: schemeFile.divisions, accessories: schemeFile.accessories, case: caseWork, wind, site });
   const commercial = { ...exampleCommercial(), ...(schemeFile.programme ? { startDate: schemeFile.programme.start } : {}), ...overrides };
   return buildQuotation({
     number: "Q-2028-0001",

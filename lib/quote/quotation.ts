@@ -4,8 +4,8 @@
  * afresh from the current rows whenever it is read; an issued quotation keeps the object it was
  * issued with (its snapshot), and its documents are written from that alone.
  */
-import { estimateScheme, parseScheme, type Estimate, type Rates } from "@/lib/estimate";
-import { toEstimatorScheme, type SchemeDocument, type Tuning } from "@/lib/spec/document";
+import { estimateScheme, fromTreatment, parseScheme, type Estimate, type Rates } from "@/lib/estimate";
+import { schemeDocumentSchema, toEstimatorScheme, type SchemeDocument, type Tuning } from "@/lib/spec/document";
 import type { Commercial } from "./commercial";
 import { priceQuotation, type QuoteTotals } from "./totals";
 
@@ -111,4 +111,46 @@ export function buildQuotation(input: QuotationInput): Quotation {
     throw err;
   }
   return { format: 1, ...input, estimate, totals };
+}
+
+/**
+ * An issued quotation as stored, read in today's shapes without changing a figure. A snapshot
+ * frozen before stops had an origin and a work (one `treatment` word) gets them from that word,
+ * its scheme document is read through the scheme model (which upgrades first-format stops), and
+ * the parts of the estimate it did not yet have (cost centres, parts of the work, bought-in items)
+ * read as empty: its money, totals and programme are the ones it was issued with.
+ */
+export function readQuotationSnapshot(raw: unknown): Quotation {
+  const q = raw as Quotation;
+  const doc = schemeDocumentSchema.safeParse(q.scheme?.document);
+  const e = q.estimate as Estimate & Record<string, unknown>;
+  const divisions = e.divisions.map((d) => ({
+    ...d,
+    stops: d.stops.map((s) => {
+      const stored = s as typeof s & { treatment?: string };
+      if (stored.origin !== undefined) return s;
+      const t = fromTreatment(stored.treatment) ?? { origin: "new" as const, work: [] };
+      return { ...s, origin: t.origin, work: t.work };
+    }),
+  }));
+  const money = e.money as Estimate["money"] & Partial<Record<string, unknown>>;
+  const estimate = {
+    ...e,
+    packages: Array.isArray(e.packages) ? e.packages : [],
+    divisions,
+    money: {
+      ...money,
+      items: Array.isArray(money.items) ? money.items : [],
+      itemsAmount: typeof money.itemsAmount === "string" ? money.itemsAmount : "0.00",
+      byCentre: Array.isArray(money.byCentre) ? money.byCentre : [],
+      byDivision: Array.isArray(money.byDivision) ? money.byDivision : [],
+      byPackage: Array.isArray(money.byPackage) ? money.byPackage : [],
+    },
+  } as Estimate;
+  return { ...q, scheme: { ...q.scheme, document: doc.success ? doc.data : q.scheme.document }, estimate };
+}
+
+/** Whether a stored estimate priced the organ's parts of the work one by one (case, wind, site …), as estimates since the corrected model do. */
+export function hasWorkParts(e: Estimate): boolean {
+  return e.money.byPackage.length > 0;
 }

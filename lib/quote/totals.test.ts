@@ -98,7 +98,10 @@ describe("quotation totals", () => {
     expect(t.tax.amount).toBe(new DecimalJs(t.netAmount).times(0.2).toDecimalPlaces(2, DecimalJs.ROUND_HALF_UP).toFixed(2));
     expect(t.totalAmount).toBe(sumMoney([t.netAmount, t.tax.amount]));
     expect(sumMoney(t.stages.map((s) => s.amount))).toBe(t.totalAmount);
-    expect(t.works.map((w) => w.label)).toEqual(["Great division", "Pedal division", "Console, wiring, transport and general work"]);
+    // Each division, then the organ's own parts of the work that cost something (no case in this scheme).
+    expect(t.works.map((w) => w.label)).toEqual(["Great division", "Pedal division", "Wind system", "Console", "Site, transport and travel", "Design and management"]);
+    const organ = estimate.money.byCentre.filter((x) => x.division === null).map((x) => x.directCostAmount);
+    expect(sumMoney(organ)).toBe(estimate.schemeWide.directCostAmount);
   });
 
   it("charges no tax under a zero-rated, exempt or reverse-charge treatment, and options stand apart from the total", () => {

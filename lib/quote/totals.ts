@@ -93,12 +93,17 @@ export class QuoteTotalsError extends Error {
   }
 }
 
-/** Cost centres of the estimate with their direct costs and the labels a client reads. */
+/**
+ * Cost centres of the estimate with their direct costs and the labels a client reads: each division,
+ * then the organ's own parts of the work (wind system, case and front, console, site, design …), each
+ * on its own line. An estimate from before those parts were priced one by one has one general line.
+ */
 function centres(estimate: Estimate): { id: string; label: string; weight: string }[] {
-  return [
-    ...estimate.divisions.map((d) => ({ id: d.id, label: `${d.name}${/division$/i.test(d.name) ? "" : " division"}`, weight: d.directCostAmount })),
-    { id: "general", label: "Console, wiring, transport and general work", weight: estimate.schemeWide.directCostAmount },
-  ];
+  const divisions = estimate.divisions.map((d) => ({ id: d.id, label: `${d.name}${/division$/i.test(d.name) ? "" : " division"}`, weight: d.directCostAmount }));
+  const organ = (estimate.money.byCentre ?? []).filter((c) => c.division === null);
+  if (!organ.length) return [...divisions, { id: "general", label: "Console, wiring, transport and general work", weight: estimate.schemeWide.directCostAmount }];
+  const labels = new Map((estimate.money.byPackage ?? []).map((p) => [p.package, p.label]));
+  return [...divisions, ...organ.map((c) => ({ id: `organ-${c.package}`, label: labels.get(c.package) ?? c.package, weight: c.directCostAmount }))];
 }
 
 /** The quotation's lines and totals from the frozen estimate and the commercial terms. Pure; throws QuoteTotalsError for a discount larger than what it applies to. */

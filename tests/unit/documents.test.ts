@@ -13,7 +13,8 @@ import { writeDocument } from "@/lib/documents";
 import { formatCount, formatMoney } from "@/lib/documents/common";
 import { workItems } from "@/lib/documents/work-list";
 import { exampleQuotation } from "@/lib/quote/example";
-import type { Quotation } from "@/lib/quote/quotation";
+import { readQuotationSnapshot, type Quotation } from "@/lib/quote/quotation";
+import issuedFirstFormat from "@/lib/quote/test-support/issued-first-format.json";
 
 const large = JSON.parse(readFileSync(join(__dirname, "../../examples/large-five-manual.json"), "utf8"));
 /** Spaces of every width as one plain space, so a figure reads the same in docx, mammoth and pdftotext. */
@@ -54,7 +55,7 @@ describe("the tender for the large example, read back with mammoth", () => {
 
   it("gives every division's pipe total and price, and the grand total, exactly as the frozen estimate and totals have them", () => {
     for (const d of q.estimate.divisions) {
-      const stops = d.stops.filter((s) => s.treatment !== "removed").length;
+      const stops = d.stops.filter((s) => s.origin !== "removed").length;
       expect(text, d.name).toContain(norm(`${d.name}: ${stops} stops pipes ${formatCount(d.pipes.total)}`));
     }
     for (const w of q.totals.works) expect(text, w.label).toContain(norm(`${w.label} € ${formatMoney(w.amount)}`));
@@ -72,6 +73,20 @@ describe("the tender for the large example, read back with mammoth", () => {
     expect(text).toMatch(/local codes, regulations/);
     expect(text).toMatch(/Signature:/);
     expect(text).toContain(q.number);
+  });
+
+  it("prices the organ's own parts of the work on their own lines and says what they are", () => {
+    // The large example has a new case with display pipes, a new wind system and a site 320 km away (examples/large-five-manual.json).
+    for (const label of ["Case and front", "Wind system", "Console", "Site, transport and travel", "Design and management"]) {
+      const line = q.totals.works.find((w) => w.label === label);
+      expect(line, label).toBeDefined();
+      expect(text).toContain(norm(`${label} € ${formatMoney(line!.amount)}`));
+    }
+    expect(text).not.toContain("Console, wiring, transport and general work");
+    expect(text).toContain("Wind, case, site and design");
+    expect(text).toMatch(/Wind system new: a new blower of about [\d.,]+ m³\/min/);
+    expect(text).toMatch(/Case new, about 14[\s,]?000 mm wide/);
+    expect(text).toContain(`${q.estimate.case.dummyPipes} new display pipes`);
   });
 
   it("says nothing of the firm's hours, rates or margins", () => {
@@ -126,7 +141,7 @@ describe("the internal cost sheet and the workshop's work list", () => {
     const doc = norm((await mammoth.extractRawText({ buffer: await writeDocument("work-list", q) })).value);
     expect(doc).not.toMatch(/€|EUR|[Mm]argin/);
     const items = workItems(q);
-    const expected = q.estimate.divisions.flatMap((d) => d.stops.filter((s) => ["restored", "revoiced", "relocated"].includes(s.treatment) || ((s.treatment === "new" || s.treatment === "extension") && s.pipes.new > 0)));
+    const expected = q.estimate.divisions.flatMap((d) => d.stops.filter((s) => s.work.some((w) => ["restored", "revoiced", "relocated", "rescaled"].includes(w)) || ((s.origin === "new" || s.origin === "extension") && s.pipes.new > 0)));
     expect(items).toHaveLength(expected.length);
     for (const i of items) expect(doc).toContain(norm(`${i.stop.name} ${i.pitch}`));
     // New work before restoration, restoration before revoicing; within a kind, the longest pipes first.
@@ -144,5 +159,35 @@ describe("the internal cost sheet and the workshop's work list", () => {
     for (const name of Object.keys(za.files).filter((n) => !n.startsWith("word/fonts/") && n !== "word/fontTable.xml")) {
       expect(await zb.file(name)!.async("nodebuffer"), name).toEqual(await za.file(name)!.async("nodebuffer"));
     }
+  }, 60_000);
+});
+
+describe("a quotation issued before stops had an origin and a work", () => {
+  // Frozen by the first format: stops with one treatment word, an estimate with no parts of the work
+  // (lib/quote/test-support/issued-first-format.json, the small example as issued then).
+  const old = readQuotationSnapshot(issuedFirstFormat);
+
+  it("opens with its stops read in today's words and its figures as issued", () => {
+    const doc = old.scheme.document.divisions.flatMap((d) => d.stops);
+    expect(doc.find((s) => s.name === "Stopped Diapason")).toMatchObject({ origin: "existing", work: ["restored"] });
+    const est = old.estimate.divisions.flatMap((d) => d.stops);
+    expect(est.find((s) => s.name === "Bass Flute")).toMatchObject({ origin: "extension", work: [] });
+    expect(old.totals).toEqual(issuedFirstFormat.totals);
+    expect(old.estimate.money.netAmount).toBe(issuedFirstFormat.estimate.money.netAmount);
+  });
+
+  it("writes its tender, cost sheet and work list with the price it was issued at", async () => {
+    const tenderText = norm((await mammoth.extractRawText({ buffer: await writeDocument("tender", old) })).value);
+    expect(tenderText).toContain(norm(`Total price € ${formatMoney(issuedFirstFormat.totals.totalAmount)}`));
+    expect(tenderText).toContain(norm(`Console, wiring, transport and general work € ${formatMoney(issuedFirstFormat.totals.works.at(-1)!.amount)}`));
+    expect(tenderText).toContain("Existing stops to be restored");
+    expect(tenderText).toContain("Existing: restored");
+    // It priced no case, wind or site lines, so its scope does not claim them.
+    expect(tenderText).not.toContain("Wind, case, site and design");
+    const sheet = norm((await mammoth.extractRawText({ buffer: await writeDocument("cost-sheet", old) })).value);
+    expect(sheet).toContain(norm(`Total price quoted € ${formatMoney(issuedFirstFormat.totals.totalAmount)}`));
+    const list = norm((await mammoth.extractRawText({ buffer: await writeDocument("work-list", old) })).value);
+    expect(list).toContain("Restoration");
+    expect(list).toContain("Stopped Diapason");
   }, 60_000);
 });
