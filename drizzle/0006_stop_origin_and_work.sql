@@ -1,0 +1,1 @@
+ALTER TABLE "schemes" ADD COLUMN "works" jsonb DEFAULT '{}'::jsonb NOT NULL;
