@@ -117,7 +117,7 @@ export const DEFAULT_RATES: Rates = {
     reservoirBase: 120,
     reservoirPerM3PerMin: 4,
     trunkingPerM: 5,
-    tremulant: 24,
+    tremulantFitting: 24,
     blowerInstall: 24,
     windRestoredFactor: 0.5,
     windRetainedFactor: 0.1,

@@ -81,7 +81,7 @@ export const normsSchema = z.object({
   reservoirBase: hours("Reservoir, fixed part", "Per reservoir (one per wind pressure)."),
   reservoirPerM3PerMin: hours("Reservoir, per m³/min of wind it supplies"),
   trunkingPerM: hours("Wind trunking per metre"),
-  tremulant: hours("Tremulant", "Per tremulant."),
+  tremulantFitting: hours("Fitting a tremulant", "Per tremulant."),
   blowerInstall: hours("Installing a blower", "Blower box, silencing, supply connection by others."),
   windRestoredFactor: factor("Restored wind system, share of new", "Releathering reservoirs, overhauling trunks."),
   windRetainedFactor: factor("Retained wind system, share of new"),

@@ -65,7 +65,7 @@ export function bookWindSystem(
     centre.items[ITEM.reservoirMaterialsBase] += factor;
     centre.items[ITEM.reservoirMaterialsPerM3PerMin] += factor * r.flowM3PerMin;
   }
-  hours += trunkM * n.trunkingPerM + tremulants * n.tremulant;
+  hours += trunkM * n.trunkingPerM + tremulants * n.tremulantFitting;
   centre.items[ITEM.trunkingPerM] += factor * trunkM;
   centre.items[ITEM.tremulant] += factor * tremulants;
   centre.hours[D.chestAction] += factor * hours;
