@@ -102,7 +102,8 @@ function centres(estimate: Estimate): { id: string; label: string; weight: strin
   const divisions = estimate.divisions.map((d) => ({ id: d.id, label: `${d.name}${/division$/i.test(d.name) ? "" : " division"}`, weight: d.directCostAmount }));
   const organ = (estimate.money.byCentre ?? []).filter((c) => c.division === null);
   if (!organ.length) return [...divisions, { id: "general", label: "Console, wiring, transport and general work", weight: estimate.schemeWide.directCostAmount }];
-  const labels = new Map((estimate.money.byPackage ?? []).map((p) => [p.package, p.label]));
+  // The organ's own "chests and action" centre holds only the coupler machine (organ-work.ts): say so.
+  const labels = new Map<string, string>([...(estimate.money.byPackage ?? []).map((p) => [p.package, p.label] as const), ["chests", "Coupler action"]]);
   return [...divisions, ...organ.map((c) => ({ id: `organ-${c.package}`, label: labels.get(c.package) ?? c.package, weight: c.directCostAmount }))];
 }
 
