@@ -34,6 +34,7 @@ export const DEFAULT_RATES: Rates = {
   contingencyPercent: "7.5",
   marginPercent: "12",
   taxPercent: "20",
+  drawingUnits: "mm",
   alloys: {
     "high-tin": { tin: 0.75, lead: 0.25 },
     spotted: { tin: 0.5, lead: 0.5 },

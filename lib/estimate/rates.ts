@@ -178,6 +178,8 @@ export const ratesSchema = z.object({
   contingencyPercent: percent({ title: "Contingency", description: "Of direct cost and overheads." }),
   marginPercent: percent({ title: "Margin", description: "Of direct cost, overheads and contingency." }),
   taxPercent: percent({ title: "Tax", description: "Of the net amount." }),
+  /** How the firm reads lengths and weights on pipe tables and drawings: millimetres and kilograms, or inches and pounds. */
+  drawingUnits: z.enum(["mm", "in"]).default("mm").meta({ title: "Units of pipe tables and drawings", description: "mm: millimetres and kilograms; in: inches and pounds." }),
   /** Weight fractions of each pipe metal. */
   alloys: recordOf(metals, () => composition),
   woodDensityKgM3: recordOf(woods, (w) => num({ title: `Density: ${w}`, unit: "kg/m³", min: 1 })),
