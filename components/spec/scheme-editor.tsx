@@ -11,6 +11,7 @@ import { schemeDocumentSchema, type SchemeDocument, type SchemeRead } from "@/li
 import { AccessoriesEditor } from "./accessories-editor";
 import { WorksEditor } from "./works-editor";
 import { ChestsView } from "./chests-view";
+import { ScalesView } from "@/components/drawing/scales-view";
 import { DivisionBoard } from "./division-board";
 import { DivisionForm } from "./division-form";
 import { addDivision, addStop, findStop, newId, removeDivision, removeStop, setAccessories, setWorks, updateDivision, updateStop } from "./doc-ops";
@@ -32,7 +33,7 @@ type Editing =
   | { kind: "details" }
   | null;
 
-type Tab = "stops" | "chests" | "accessories" | "works";
+type Tab = "stops" | "scales" | "chests" | "accessories" | "works";
 
 const detailsSchema = schemeDocumentSchema.pick({ name: true, description: true });
 
@@ -218,6 +219,7 @@ export function SchemeEditor({
             </button>
           )}
           <Link className="btn" href={`/projects/${projectId}/schemes/${initialScheme.id}/stop-list`}>Stop list</Link>
+          {showFigures && <Link className="btn" href={`/projects/${projectId}/schemes/${initialScheme.id}/pipes`}>Pipe tables</Link>}
         </div>
       </div>
 
@@ -278,6 +280,7 @@ export function SchemeEditor({
             {(
               [
                 ["stops", "Divisions and stops"],
+                ["scales", "Scales"],
                 ["chests", "Chests"],
                 ["accessories", "Couplers and accessories"],
                 ["works", "Case, wind and site"],
@@ -326,6 +329,9 @@ export function SchemeEditor({
                   onEditStop={editStop}
                 />
               ))}
+            {tab === "scales" && (
+              <ScalesView doc={doc} figures={figures} rules={drawingRulesOf(figureSource)} units={figureSource.kind === "live" ? figureSource.rates.drawingUnits : "mm"} editable={editable} projectId={projectId} schemeId={initialScheme.id} onChange={edit} />
+            )}
             {tab === "chests" && <ChestsView figures={figures} rates={drawingRulesOf(figureSource)} />}
             {tab === "accessories" && (
               <AccessoriesEditor key={save.version + ":" + history.past.length} doc={doc} editable={editable} onApply={(acc) => edit(setAccessories(doc, acc), "Changed couplers and accessories")} />

@@ -31,6 +31,7 @@ export interface PipeRow {
   /** Sheet (metal) or board (wood) thickness. */
   readonly thicknessMm: number | null;
   readonly wood: boolean;
+  readonly material: PipeDetail["material"];
   readonly metalKg: number;
   readonly woodM3: number;
   readonly sizeClass: SizeClass;
@@ -104,6 +105,7 @@ function rowOf(p: PipeDetail, cutUp: number, rules: GeometryRules): PipeRow {
     footLengthMm: wood ? null : rules.pipeMetal.footLengthMm[p.sizeClass],
     thicknessMm: wood ? p.boardMm : p.sheetMm,
     wood,
+    material: p.material,
     metalKg: p.metalKg,
     woodM3: p.woodM3,
     sizeClass: p.sizeClass,
@@ -169,4 +171,11 @@ export function pipeTableCsv(table: PipeTable, units: DrawingUnits): string {
   const columns = pipeTableColumns(units);
   const data = table.rows.map((r) => columns.map((c) => c.cell(r)));
   return "\uFEFF" + Papa.unparse({ fields: columns.map((c) => c.header), data }, { newline: "\r\n" });
+}
+
+/** Several stops' tables in one file, each row led by its division and stop. */
+export function pipeTablesCsv(tables: readonly PipeTable[], units: DrawingUnits): string {
+  const columns = pipeTableColumns(units);
+  const data = tables.flatMap((t) => t.rows.map((r) => [t.divisionName, t.stopName, ...columns.map((c) => c.cell(r))]));
+  return "\uFEFF" + Papa.unparse({ fields: ["Division", "Stop", ...columns.map((c) => c.header)], data }, { newline: "\r\n" });
 }
