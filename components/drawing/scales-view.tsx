@@ -267,7 +267,7 @@ function SurveyFit({
           </table>
           {result.warnings.map((w) => <p key={w} className="text-xs text-caution">⚠ {w}</p>)}
           {chart && chart.lines.some((l) => l.stopId === stop.id) && (
-            <ScalingChartSvg chart={{ ...chart, lines: chart.lines.filter((l) => l.stopId === stop.id) }} selected={stop.id} overlay={overlay} />
+            <ScalingChartSvg chart={{ ...chart, lines: chart.lines.filter((l) => l.stopId === stop.id) }} selected={stop.id} overlay={overlay} testId="fit-chart" />
           )}
           <button type="button" className="btn-primary" onClick={() => onAccept({ deviationHt: result.deviationHt, halvingOn: result.halvingOn })}>Use the fitted scale</button>
         </div>

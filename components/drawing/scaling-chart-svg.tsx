@@ -28,7 +28,7 @@ export function lineLabel(l: Pick<ScaleLine, "stopName" | "footageText" | "rank"
   return l.ranks > 1 ? `${l.stopName} ${romanNumeral(l.ranks)}, rank ${l.rank}` : `${l.stopName} ${footageText(l.footageText)}`;
 }
 
-export function ScalingChartSvg({ chart, selected, overlay }: { chart: ScalingChart; selected?: string; overlay?: Overlay | null }) {
+export function ScalingChartSvg({ chart, selected, overlay, testId }: { chart: ScalingChart; selected?: string; overlay?: Overlay | null; testId?: string }) {
   const width = 760;
   const height = 340;
   const margin = { top: 14, right: 150, bottom: 34, left: 44 };
@@ -52,7 +52,7 @@ export function ScalingChartSvg({ chart, selected, overlay }: { chart: ScalingCh
     return `${lineLabel(l)}: ${first.toFixed(1)} at ${midiToNote(l.points[0]?.keyMidi ?? 36)} to ${last.toFixed(1)} semitones at ${midiToNote(l.points[l.points.length - 1]?.keyMidi ?? 96)}`;
   });
   return (
-    <figure className="space-y-2" data-testid={`scaling-chart-${chart.divisionId}`}>
+    <figure className="space-y-2" data-testid={testId ?? `scaling-chart-${chart.divisionId}`}>
       <div className="overflow-x-auto">
       <svg viewBox={`0 0 ${width} ${height}`} className="h-auto w-full min-w-[34rem]" role="img" aria-label={`Scales of the ${chart.divisionName}, semitones from the normal scale. ${describe.join("; ")}`}>
         <Group left={margin.left} top={margin.top}>

@@ -33,7 +33,8 @@ test("a tonal director reads a stop's pipe table, switches to inches and downloa
 
   // Inches: the page and its CSV follow (92.46 mm = 3.64 in).
   await page.getByRole("link", { name: "inches, lb" }).click();
-  await expect(firstRow.locator("td").nth(4)).toHaveText("3.64");
+  await page.waitForURL(/units=in/);
+  await expect(firstRow.locator("td").nth(4)).toHaveText("3.64", { timeout: 15_000 });
   const [inches] = await Promise.all([page.waitForEvent("download"), page.getByTestId("pipe-csv").click()]);
   const inRows = Papa.parse<Record<string, string>>(readFileSync((await inches.path())!, "utf8").replace(/^\uFEFF/, ""), { header: true }).data;
   expect(Number(inRows[0]["Diameter (in)"])).toBeCloseTo(3.64, 2);
