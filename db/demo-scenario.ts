@@ -15,6 +15,19 @@ const manual = { keyboard: "manual" as const, compass: { low: "C", high: "c''''"
 const restored = { origin: "existing", work: ["restored"] } as const satisfies Partial<StopIn>;
 const pedal = { keyboard: "pedal" as const, compass: { low: "C", high: "f'" } };
 
+/**
+ * Invented survey measurements of the 1908 ranks (outside diameters; the Bourdon's inside sides), mm.
+ * Each rank's `scale` below is the one Stopwright fits to them (tests/unit/demo-survey.test.ts).
+ */
+export const SURVEY = {
+  "gt-od": [{ note: "C", sizeMm: 170.9 }, { note: "c", sizeMm: 99.7 }, { note: "c'", sizeMm: 60.3 }, { note: "c''", sizeMm: 35.5 }, { note: "c'''", sizeMm: 21.4 }],
+  "gt-du": [{ note: "C", sizeMm: 129.8 }, { note: "c", sizeMm: 78.7 }, { note: "c'", sizeMm: 45.8 }, { note: "c''", sizeMm: 27.7 }, { note: "c'''", sizeMm: 16.2 }],
+  "gt-pr": [{ note: "C", sizeMm: 93 }, { note: "c", sizeMm: 54.8 }, { note: "c'", sizeMm: 33 }, { note: "c''", sizeMm: 19.3 }],
+  "sw-sa": [{ note: "c", sizeMm: 72.2 }, { note: "c'", sizeMm: 42 }, { note: "c''", sizeMm: 25.4 }, { note: "c'''", sizeMm: 14.8 }],
+  "ped-bd": [{ note: "C", sizeMm: 233.2 }, { note: "G", sizeMm: 170.5 }, { note: "c", sizeMm: 139.2 }, { note: "c'", sizeMm: 81.4 }],
+} as const satisfies Record<string, { note: string; sizeMm: number }[]>;
+const surveyed = (id: keyof typeof SURVEY) => ({ survey: SURVEY[id].map((m) => ({ ...m })) });
+
 /** Scheme A: the 1908 two-manual organ of St Aldric's restored much as it stands. */
 export const restoreScheme: SchemeDocumentInput = {
   name: "A — Restore as found",
@@ -24,10 +37,10 @@ export const restoreScheme: SchemeDocumentInput = {
       id: "gt", name: "Great", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 89, unit: "mm" },
       consoleDistanceM: 6, space: { lengthMm: 6200, depthMm: 1450 }, chestWork: "restored",
       stops: [
-        stop("gt-od", "Open Diapason", "8", "principal", { ...restored, condition: ["feet-collapsing", "split-seams"], scale: { deviationHt: 2 }, offsetBassPipes: 12, bass: { notes: 7, material: "zinc" } }),
+        stop("gt-od", "Open Diapason", "8", "principal", { ...restored, ...surveyed("gt-od"), condition: ["feet-collapsing", "split-seams"], scale: { deviationHt: 2 }, offsetBassPipes: 12, bass: { notes: 7, material: "zinc" } }),
         stop("gt-cl", "Clarabella", "8", "flute", { ...restored, condition: ["wood-split"], construction: "open", material: "pine", bass: { notes: 12, material: "pine", construction: "stopped" } }),
-        stop("gt-du", "Dulciana", "8", "string", { ...restored, scale: { deviationHt: -4 } }),
-        stop("gt-pr", "Principal", "4", "principal", { ...restored, condition: ["feet-collapsing"] }),
+        stop("gt-du", "Dulciana", "8", "string", { ...restored, ...surveyed("gt-du"), scale: { deviationHt: -4 } }),
+        stop("gt-pr", "Principal", "4", "principal", { ...restored, ...surveyed("gt-pr"), condition: ["feet-collapsing"] }),
         stop("gt-hf", "Harmonic Flute", "4", "flute", { ...restored }),
         stop("gt-15", "Fifteenth", "2", "principal", { ...restored, condition: ["tops-torn"] }),
         stop("gt-tr", "Trumpet", "8", "reed", { origin: "existing", work: ["restored", "revoiced"], condition: ["tongues-worn"], construction: "reed", fluesFrom: "c'''" }),
@@ -39,7 +52,7 @@ export const restoreScheme: SchemeDocumentInput = {
       stops: [
         stop("sw-ob", "Open Diapason", "8", "principal", { ...restored, offsetBassPipes: 12, bass: { notes: 12, material: "pine", construction: "stopped" } }),
         stop("sw-lg", "Lieblich Gedackt", "8", "flute", { ...restored, condition: ["woodworm"], construction: "stopped", material: "pine" }),
-        stop("sw-sa", "Salicional", "8", "string", { ...restored, scale: { deviationHt: -6, mouthWidth: 0.2 } }),
+        stop("sw-sa", "Salicional", "8", "string", { ...restored, ...surveyed("sw-sa"), scale: { deviationHt: -6, mouthWidth: 0.2 } }),
         stop("sw-vc", "Voix Céleste", "8", "string", { ...restored, scale: { deviationHt: -6, mouthWidth: 0.2 }, compass: { low: "c", high: "c''''" } }),
         stop("sw-ge", "Gemshorn", "4", "principal", { ...restored, construction: "conical" }),
         stop("sw-mx", "Mixture", "1 1/3", "mixture", { ...restored, condition: ["feet-collapsing"], ranks: 3, breaks: [
@@ -54,7 +67,7 @@ export const restoreScheme: SchemeDocumentInput = {
       id: "ped", name: "Pedal", ...pedal, action: "electro-pneumatic", chest: "pitman", chestLayout: "chromatic",
       windPressure: { value: 100, unit: "mm" }, consoleDistanceM: 12, space: { lengthMm: 7800, depthMm: 1000 }, chestWork: "restored", passageBoard: false,
       stops: [
-        stop("ped-bd", "Bourdon", "16", "flute", { ...restored, condition: ["wood-split"], construction: "stopped", material: "pine" }),
+        stop("ped-bd", "Bourdon", "16", "flute", { ...restored, ...surveyed("ped-bd"), condition: ["wood-split"], construction: "stopped", material: "pine" }),
         stop("ped-bf", "Bass Flute", "8", "flute", { origin: "extension", source: "ped-bd", addedPipes: "existing", work: ["restored"], construction: "stopped", material: "pine" }),
       ],
     },

@@ -10,7 +10,9 @@ import { useMemo, useState } from "react";
 import { planScheme } from "@/lib/estimate/pipes";
 import { parseCompass } from "@/lib/estimate/notes";
 import { parseFootage, semitonesAbove8ft } from "@/lib/estimate/pitch";
-import { fitScale, type FitResult } from "@/lib/drawing/scale-fit";
+import { deviationHt, fitScale, RANK_C_MIDI, type FitResult } from "@/lib/drawing/scale-fit";
+import { SQUARE_SIDE_PER_DIAMETER } from "@/lib/estimate/scale";
+import { midiToNote, noteToMidi } from "@/lib/estimate/notes";
 import { scalingChart } from "@/lib/drawing/scaling-chart";
 import { lengthIn, lengthToMm, lengthUnitLabel, type DrawingUnits } from "@/lib/drawing/units";
 import type { DrawingRules } from "@/lib/spec/estimate";
@@ -101,7 +103,7 @@ export function ScalesView({
             Each rank&apos;s pipes as semitones wider (+) or narrower (−) than the normal scale (8′ C 155.5 mm, halving on the 17th note). A level line keeps the normal halving; a rising line widens towards the treble (a later halving), a falling one narrows.
           </p>
           {chart ? (
-            <ScalingChartSvg chart={chart} selected={stop?.id} overlay={null} />
+            <ScalingChartSvg chart={chart} selected={stop?.id} overlay={stop ? surveyOverlay(stop) : null} />
           ) : (
             <p className="text-sm text-caution" role="status">The chart waits for the scheme to be complete: {figures.ok ? "" : figures.messages[0]}</p>
           )}
@@ -122,10 +124,10 @@ export function ScalesView({
                 compass={stop.compass ?? division.compass}
                 units={units}
                 chart={chart}
-                onAccept={(scale) => {
+                onAccept={(scale, survey) => {
                   const found = findStop(doc, stop.id);
                   if (!found) return;
-                  onChange(updateStop(doc, { ...found.stop, scale: { ...found.stop.scale, ...scale } }), `Fitted the scale of ${division.name} ${stop.name} to the survey`);
+                  onChange(updateStop(doc, { ...found.stop, scale: { ...found.stop.scale, ...scale }, survey }), `Fitted the scale of ${division.name} ${stop.name} to the survey`);
                 }}
               />
             )}
@@ -134,6 +136,20 @@ export function ScalesView({
       </div>
     </div>
   );
+}
+
+/** A stop's kept survey as points on the chart: each measured pipe's own deviation from the normal scale. */
+function surveyOverlay(stop: DocStop): Overlay | null {
+  if (!stop.survey?.length) return null;
+  const ref = semitonesAbove8ft(parseFootage(stop.footage) ?? { num: 8, den: 1 });
+  const wooden = WOODS.includes(stop.material);
+  const measured = stop.survey.flatMap((m) => {
+    const key = noteToMidi(m.note);
+    if (key === null) return [];
+    const d = wooden ? m.sizeMm / SQUARE_SIDE_PER_DIAMETER : m.sizeMm;
+    return [{ keyMidi: key, note: midiToNote(key), deviationHt: deviationHt(ref + key - RANK_C_MIDI, d) }];
+  });
+  return { stopId: stop.id, measured, fitted: null };
 }
 
 function ScaleForm({ stop, editable, onApply }: { stop: DocStop; editable: boolean; onApply: (scale: DocStop["scale"]) => void }) {
@@ -180,11 +196,16 @@ function SurveyFit({
   compass: { low: string; high: string };
   units: DrawingUnits;
   chart: ReturnType<typeof scalingChart> | null;
-  onAccept: (scale: { deviationHt: number; halvingOn: number }) => void;
+  onAccept: (scale: { deviationHt: number; halvingOn: number }, survey: { note: string; sizeMm: number }[]) => void;
 }) {
   const wooden = WOODS.includes(stop.material);
   const keys = parseCompass(stop.compass ?? compass) ?? { lowMidi: 36, highMidi: 96 };
-  const [rows, setRows] = useState<Row[]>(() => DEFAULT_NOTES.map((note) => ({ note, size: "" })));
+  // The survey kept with the stop, in the firm's units; otherwise the C of each octave to fill in.
+  const [rows, setRows] = useState<Row[]>(() =>
+    stop.survey?.length
+      ? stop.survey.map((m) => ({ note: m.note, size: String(Number(lengthIn(units, m.sizeMm).toFixed(units === "mm" ? 1 : 3))) }))
+      : DEFAULT_NOTES.map((note) => ({ note, size: "" })),
+  );
   const [result, setResult] = useState<FitResult | null>(null);
   const L = lengthUnitLabel(units);
   const ref = semitonesAbove8ft(parseFootage(stop.footage) ?? { num: 8, den: 1 });
@@ -269,7 +290,9 @@ function SurveyFit({
           {chart && chart.lines.some((l) => l.stopId === stop.id) && (
             <ScalingChartSvg chart={{ ...chart, lines: chart.lines.filter((l) => l.stopId === stop.id) }} selected={stop.id} overlay={overlay} testId="fit-chart" />
           )}
-          <button type="button" className="btn-primary" onClick={() => onAccept({ deviationHt: result.deviationHt, halvingOn: result.halvingOn })}>Use the fitted scale</button>
+          <button type="button" className="btn-primary" onClick={() => onAccept({ deviationHt: result.deviationHt, halvingOn: result.halvingOn }, result.residuals.map((r) => ({ note: r.note, sizeMm: Math.round(r.measuredMm * 100) / 100 })))}>
+            Use the fitted scale
+          </button>
         </div>
       )}
     </section>

@@ -378,7 +378,8 @@ export function SchemeEditor({
             sources={sources.filter((s) => s.id !== editing.stopId)}
             onCancel={() => setEditing(null)}
             onSubmit={(stop) => {
-              if (editingStop) edit(updateStop(doc, stop), `Changed ${stop.name} ${pitchText(stop)}`);
+              // The form has no fields for survey measurements (the Scales tab keeps them): they stay with the stop.
+              if (editingStop) edit(updateStop(doc, { ...(editingStop.stop.survey ? { survey: editingStop.stop.survey } : {}), ...stop }), `Changed ${stop.name} ${pitchText(stop)}`);
               else edit(addStop(doc, editing.divisionId, stop), `Added ${stop.name} ${pitchText(stop)} to the ${targetDivision?.name}`);
               setEditing(null);
             }}

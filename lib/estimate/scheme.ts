@@ -128,6 +128,12 @@ const stopFields = z.object({
   duplex: z.boolean().default(false),
   /** The lowest N pipes stand on an offset chest, off the main chest. */
   offsetBassPipes: z.number().int().min(0).max(32).default(0),
+  /**
+   * Survey measurements of an existing rank: at a few keys, a pipe's outside diameter (a wooden
+   * pipe's inside side), mm. The scale fitted to them (lib/drawing/scale-fit.ts) is `scale`; the
+   * estimator does not read them.
+   */
+  survey: z.array(z.object({ note: noteName, sizeMm: z.number().min(1).max(1000) })).max(61).optional(),
 });
 
 // ── reading the first format ─────────────────────────────────────────────────────────────────
