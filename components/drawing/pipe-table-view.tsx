@@ -30,7 +30,8 @@ export function PipeTableView({ table, units, rules }: { table: PipeTable; units
         <p className="text-sm text-ink-soft" data-testid="pipe-totals">
           {table.rows.length} {table.rows.length === 1 ? "pipe" : "pipes"} listed{ranks > 1 ? ` in ${ranks} ranks` : ""}
           {states.length > 0 && ` — ${states.map((k) => `${t.byState[k]} ${pipeStateLabels[k]}`).join(", ")}`}
-          {" · "}in the organ: {t.inOrgan} pipes, metal {nf(weightIn(units, t.metalKg), 1)} {W}
+          {" · "}in the organ: {t.inOrgan} pipes
+          {table.rows.some((r) => !r.wood) && `, metal ${nf(weightIn(units, t.metalKg), 1)} ${W}`}
           {t.woodM3 > 0 && `, timber ${nf(t.woodM3 * 1000, 1)} litres`}
           {t.onOffsetChest > 0 && ` · ${t.onOffsetChest} on an offset chest`}
         </p>
