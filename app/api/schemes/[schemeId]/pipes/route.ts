@@ -4,10 +4,9 @@ import { planDocument } from "@/lib/drawing/scheme-plan";
 import { parseDrawingUnits } from "@/lib/drawing/units";
 import { AppError } from "@/lib/server/errors";
 import { route } from "@/lib/server/guard";
+import { schemeParams } from "@/lib/server/params";
 import { firmRates } from "@/lib/server/rates";
 import { drawingRules } from "@/lib/spec/estimate";
-
-type Params = { schemeId: string };
 
 const safeName = (name: string) => name.normalize("NFKD").replace(/[^\w\- ]+/g, "").trim().replace(/\s+/g, "-").slice(0, 60) || "pipes";
 
@@ -15,13 +14,16 @@ const safeName = (name: string) => name.normalize("NFKD").replace(/[^\w\- ]+/g, 
  * A stop's pipe table as CSV (`?stop=ID`), or every stop's (`?stop=all`), in the firm's units or
  * `?units=mm|in`. The pipe shop's and the estimator's reading, not the committee's: estimate:read.
  */
-export const GET = route<undefined, Params>({ permission: "estimate:read" }, async ({ user, params, url }) => {
+export const GET = route({ permission: "estimate:read", params: schemeParams }, async ({ user, params, url }) => {
   const scheme = await getSchemeForUser({ user, schemeId: params.schemeId });
   const stopId = url.searchParams.get("stop") ?? "all";
-  const units = parseDrawingUnits(url.searchParams.get("units"), firmRates().drawingUnits);
+  // A stop id longer than any the scheme model admits names no stop; it is not looked for.
+  if (stopId.length > 200) throw new AppError("not_found", "This scheme has no such stop; it may have been removed since the page was opened.");
+  const rates = await firmRates();
+  const units = parseDrawingUnits(url.searchParams.get("units")?.slice(0, 10) ?? null, rates.drawingUnits);
   const planned = planDocument(scheme.document, scheme.tuning);
   if (!planned.ok) throw new AppError("invalid", `The pipes cannot be listed until the scheme is complete: ${planned.messages[0]}`, { stop: [...planned.messages] });
-  const rules = drawingRules(firmRates());
+  const rules = drawingRules(rates);
   let body: string;
   let name: string;
   if (stopId === "all") {

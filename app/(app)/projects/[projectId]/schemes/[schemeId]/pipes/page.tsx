@@ -22,7 +22,7 @@ export default async function PipesPage({ params, searchParams }: { params: Prom
   const base = `/projects/${projectId}/schemes/${schemeId}`;
   const user = await requirePageUser("estimate:read", `${base}/pipes`);
   const { scheme, project } = await loadSchemePage(user, projectId, schemeId);
-  const rates = firmRates();
+  const rates = await firmRates();
   const units = parseDrawingUnits(search.units, rates.drawingUnits);
   const planned = planDocument(scheme.document, scheme.tuning);
   const doc = scheme.document;
