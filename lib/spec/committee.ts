@@ -1,5 +1,6 @@
 /** The client committee's shapes, shared by forms, the API and the pages. Pure. */
 import { z } from "zod";
+import { personName } from "@/lib/validation/names";
 import { newUserSchema } from "@/lib/validation/users";
 
 /** How long an invitation link stays good. */
@@ -7,7 +8,7 @@ export const INVITATION_DAYS = 14;
 
 export const inviteSchema = z.object({
   email: z.string().trim().toLowerCase().email("Enter a valid e-mail address."),
-  name: z.string().trim().min(1, "Enter the person's name.").max(120, "Keep the name under 120 characters."),
+  name: personName,
 });
 export type InviteInput = z.input<typeof inviteSchema>;
 

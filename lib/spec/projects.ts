@@ -1,5 +1,6 @@
 /** Project shapes shared by forms, the API and the pages. Pure. */
 import { z } from "zod";
+import { cleanName } from "@/lib/validation/names";
 import { emailField } from "@/lib/validation/text";
 import type { SchemeRead } from "./document";
 
@@ -26,8 +27,8 @@ export const targetDateSchema = z
   .refine((d) => d >= "1900-01-01" && d <= "2199-12-31", "Use a date between 1900 and 2199.");
 
 export const projectInputSchema = z.object({
-  name: z.string().trim().min(1, "Give the project a name.").max(160),
-  clientName: z.string().trim().min(1, "Name the client (church, school, hall…).").max(160),
+  name: cleanName(z.string().trim().min(1, "Give the project a name.").max(160)),
+  clientName: cleanName(z.string().trim().min(1, "Name the client (church, school, hall…).").max(160)),
   venue: z.string().trim().max(160).default(""),
   location: z.string().trim().max(160).default(""),
   instrument: z.string().trim().max(300).default(""),

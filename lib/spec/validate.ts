@@ -5,7 +5,8 @@
  * refuse the same things in the same words. Pure.
  */
 import { describeIssue, planScheme, schemeSchema } from "@/lib/estimate";
-import { schemeDocumentSchema, toEstimatorScheme, type SchemeDocument } from "./document";
+import { where } from "@/lib/estimate/pipes";
+import { schemeDocumentSchema, toEstimatorScheme, type DocDivision, type DocStop, type SchemeDocument } from "./document";
 
 export type DocumentIssues = Record<string, string[]>;
 export type DocumentCheck = { ok: true; document: SchemeDocument } | { ok: false; fields: DocumentIssues };
@@ -41,8 +42,50 @@ export function checkDocument(raw: unknown, prefix = ""): DocumentCheck {
   }
   if (parsed.data.divisions.length) {
     // Tuning does not change what is consistent; the project's own is applied when estimating.
-    const scheme = schemeSchema.parse(toEstimatorScheme(parsed.data, { pitchHz: 440, temperatureC: 18 }));
-    for (const issue of planScheme(scheme).issues) add(out, prefix + issue.path.join("."), issue.message);
+    for (const issue of consistencyIssues(parsed.data)) add(out, prefix + issue.path.join("."), issue.message);
   }
   return Object.keys(out).length ? { ok: false, fields: out } : { ok: true, document: parsed.data };
+}
+
+type Issue = { path: readonly (string | number)[]; message: string };
+
+/**
+ * The estimator's consistency checks of a valid document. A division whose compass is wrong (it
+ * runs downward) makes every stop in it look wrong too ("12 offset bass pipes, but the stop has
+ * only 0 notes"): those follow-on messages are left out, so the one real problem is the one said.
+ */
+function consistencyIssues(doc: SchemeDocument): Issue[] {
+  // Tuning does not change what is consistent; the project's own is applied when estimating.
+  const scheme = schemeSchema.parse(toEstimatorScheme(doc, { pitchHz: 440, temperatureC: 18 }));
+  const issues = planScheme(scheme).issues;
+  const badCompass = new Set(issues.filter((i) => i.path[0] === "divisions" && i.path[2] === "compass").map((i) => i.path[1]));
+  return issues.filter((i) => !(i.path[0] === "divisions" && badCompass.has(i.path[1]) && i.path[2] === "stops"));
+}
+
+/** A message without the `Division "Great": ` (or `…, stop "X": `) it starts with, for a form that shows it in place. */
+function inPlace(message: string, division: DocDivision, stop?: DocStop): string {
+  const prefix = `${stop ? where(division, stop) : where(division)}: `;
+  const rest = message.startsWith(prefix) ? message.slice(prefix.length) : message;
+  return rest.charAt(0).toUpperCase() + rest.slice(1);
+}
+
+/**
+ * What the server would refuse in a division as the division form would save it (same checks as
+ * checkDocument, on the scheme with this division in place): problems of the division's own fields
+ * keyed by their path in the division ("compass"), and problems it would cause in its stops, named.
+ */
+export function checkDivisionInDocument(doc: SchemeDocument, division: DocDivision): { fields: DocumentIssues; stops: string[] } {
+  const at = doc.divisions.findIndex((d) => d.id === division.id);
+  const divisions = at >= 0 ? doc.divisions.map((d, i) => (i === at ? division : d)) : [...doc.divisions, division];
+  const index = at >= 0 ? at : divisions.length - 1;
+  const fields: DocumentIssues = {};
+  const stops: string[] = [];
+  for (const issue of consistencyIssues({ ...doc, divisions })) {
+    if (issue.path[0] !== "divisions" || issue.path[1] !== index) continue;
+    if (issue.path[2] === "stops") {
+      const stop = division.stops[Number(issue.path[3])] as DocStop | undefined;
+      stops.push(`${stop?.name ?? "A stop"}: ${inPlace(issue.message, division, stop)}`);
+    } else add(fields, issue.path.slice(2).join("."), inPlace(issue.message, division));
+  }
+  return { fields, stops };
 }

@@ -1,10 +1,11 @@
 import { z } from "zod";
 import { roles } from "@/lib/roles";
+import { personName } from "./names";
 import { emailField } from "./text";
 
 /** One schema for the admin form (react-hook-form) and the server. */
 export const newUserSchema = z.object({
-  name: z.string().trim().min(1, "Enter the person's name.").max(120, "Keep the name under 120 characters."),
+  name: personName,
   email: emailField,
   role: z.enum(roles, { error: "Choose a role." }),
   password: z.string().min(10, "Use at least 10 characters.").max(200, "Keep the password under 200 characters."),
@@ -13,7 +14,7 @@ export type NewUserInput = z.infer<typeof newUserSchema>;
 
 export const updateUserSchema = z
   .object({
-    name: z.string().trim().min(1).max(120).optional(),
+    name: personName.optional(),
     role: z.enum(roles, { error: "Choose a role." }).optional(),
     disabled: z.boolean().optional(),
   })

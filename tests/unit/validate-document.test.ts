@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { checkDocument } from "@/lib/spec/validate";
+import { checkDivisionInDocument, checkDocument } from "@/lib/spec/validate";
 import { smallDocument } from "../support/fixtures";
 
 describe("checkDocument", () => {
@@ -52,5 +52,48 @@ describe("documents saved in the first format", () => {
     expect(res.document.divisions[0]!.stops[0]).toMatchObject({ origin: "existing", work: ["relocated"] });
     expect(res.document.divisions[0]!.stops[0]).not.toHaveProperty("treatment");
     expect(res.document.divisions[1]!.stops[1]).toMatchObject({ origin: "extension", source: "ped-bd" });
+  });
+});
+
+describe("a division checked where it stands (the division form's check)", () => {
+  const parsed = () => {
+    const res = checkDocument(smallDocument());
+    if (!res.ok) throw new Error("fixture");
+    return res.document;
+  };
+
+  it("says a reversed compass once, without the follow-on messages about its stops", () => {
+    const doc = smallDocument();
+    doc.divisions![0]!.compass = { low: "c''''", high: "C" };
+    doc.divisions![0]!.stops![0]!.offsetBassPipes = 12;
+    const res = checkDocument(doc);
+    expect(res.ok).toBe(false);
+    if (res.ok) return;
+    expect(Object.keys(res.fields)).toEqual(["divisions.0.compass"]);
+    expect(Object.values(res.fields).flat().join(" ")).not.toMatch(/offset bass/);
+  });
+
+  it("keys the problem by the division's own field, worded for the place it is shown", () => {
+    const doc = parsed();
+    const great = { ...doc.divisions[0]!, compass: { low: "c''''", high: "C" } };
+    const { fields, stops } = checkDivisionInDocument(doc, great);
+    expect(fields).toEqual({ compass: ["Compass runs downward (c'''' to C); give the lowest note first"] });
+    expect(stops).toEqual([]);
+  });
+
+  it("names the stops a narrower compass would break, and passes a sound division", () => {
+    const doc = parsed();
+    const pedal = doc.divisions[1]!;
+    expect(checkDivisionInDocument(doc, pedal)).toEqual({ fields: {}, stops: [] });
+    const withOffset = { ...pedal, compass: { low: "C", high: "E" }, stops: pedal.stops.map((s, i) => (i === 0 ? { ...s, offsetBassPipes: 12 } : s)) };
+    const { fields, stops } = checkDivisionInDocument(doc, withOffset);
+    expect(fields).toEqual({});
+    expect(stops.join(" ")).toMatch(/^Bourdon: 12 offset bass pipes, but the stop has only 5 notes/);
+  });
+
+  it("checks a new division against the stops it would draw on in the others", () => {
+    const doc = parsed();
+    const added = { ...doc.divisions[1]!, id: "echo", name: "Echo", stops: [{ ...doc.divisions[1]!.stops[1]!, id: "echo-b", source: "nowhere" }] };
+    expect(checkDivisionInDocument(doc, added).stops).toEqual(['Bass Flute: Extension source "nowhere" does not exist']);
   });
 });
