@@ -6,6 +6,7 @@ import type { z } from "zod";
 import { ApiError, errorText } from "@/components/spec/api";
 import { formatDate, formatDateTime } from "@/components/spec/format";
 import { applyServerErrors } from "@/components/ui/server-errors";
+import { ConfirmButton } from "@/components/ui/confirm";
 import { useInvitations, useInvite, useRemoveCommitteeMember, useResendInvitation, useWithdrawInvitation } from "@/lib/query/hooks";
 import { inviteSchema, type InvitationState } from "@/lib/spec/committee";
 import type { ProjectMember } from "@/lib/spec/projects";
@@ -71,10 +72,22 @@ export function CommitteePanel({ projectId, members }: { projectId: string; memb
               <span className="block font-medium">{m.name}</span>
               <span className="block truncate text-xs text-tin">{m.email}</span>
             </span>
-            <button type="button" className="btn py-1 text-xs" disabled={remove.isPending} aria-label={`Remove ${m.name} from the committee`}
-              onClick={() => remove.mutate(m.id, { onSuccess: () => setNotice({ ok: true, text: `${m.name} was removed from the committee.` }), onError: fail })}>
-              Remove
-            </button>
+            <ConfirmButton
+              label="Remove"
+              className="btn py-1 text-xs"
+              ariaLabel={`Remove ${m.name} from the committee`}
+              title={`Remove ${m.name} from the committee?`}
+              confirmLabel="Remove from the committee"
+              danger
+              disabled={remove.isPending}
+              onConfirm={async () => {
+                await remove.mutateAsync(m.id);
+                setNotice({ ok: true, text: `${m.name} was removed from the committee.` });
+              }}
+            >
+              <p><bdi className="font-semibold">{m.name}</bdi> no longer sees this project&apos;s schemes, comments or files, and is not told of new ones.</p>
+              <p className="text-ink-soft">Their comments and preference stay in the record. You can invite them again later.</p>
+            </ConfirmButton>
           </li>
         ))}
         {committee.length === 0 && <li className="px-4 py-3 text-tin">No committee members yet.</li>}
@@ -97,10 +110,21 @@ export function CommitteePanel({ projectId, members }: { projectId: string; memb
                   Send again
                 </button>
                 {i.state === "pending" && (
-                  <button type="button" className="btn py-1 text-xs" disabled={withdraw.isPending} aria-label={`Withdraw the invitation to ${i.email}`}
-                    onClick={() => withdraw.mutate(i.id, { onSuccess: () => setNotice({ ok: true, text: `The invitation to ${i.email} was withdrawn.` }), onError: fail })}>
-                    Withdraw
-                  </button>
+                  <ConfirmButton
+                    label="Withdraw"
+                    className="btn py-1 text-xs"
+                    ariaLabel={`Withdraw the invitation to ${i.email}`}
+                    title="Withdraw the invitation?"
+                    confirmLabel="Withdraw the invitation"
+                    danger
+                    disabled={withdraw.isPending}
+                    onConfirm={async () => {
+                      await withdraw.mutateAsync(i.id);
+                      setNotice({ ok: true, text: `The invitation to ${i.email} was withdrawn.` });
+                    }}
+                  >
+                    <p>The link sent to <span className="font-semibold">{i.email}</span> stops working at once. You can invite them again later.</p>
+                  </ConfirmButton>
                 )}
               </li>
             ))}

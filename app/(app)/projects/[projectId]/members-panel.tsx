@@ -1,6 +1,7 @@
 "use client";
 import { useState } from "react";
 import { ApiError } from "@/components/spec/api";
+import { ConfirmButton } from "@/components/ui/confirm";
 import { useAddMember, useRemoveMember } from "@/lib/query/hooks";
 import { roleLabels, type Role } from "@/lib/roles";
 import type { ProjectMember } from "@/lib/spec/projects";
@@ -9,6 +10,7 @@ import type { ProjectMember } from "@/lib/spec/projects";
 export function MembersPanel({ projectId, members, mayEdit, selfId }: { projectId: string; members: ProjectMember[]; mayEdit: boolean; selfId: string }) {
   const [email, setEmail] = useState("");
   const [error, setError] = useState<string | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
   const add = useAddMember(projectId);
   const remove = useRemoveMember(projectId);
   const pending = add.isPending || remove.isPending;
@@ -25,14 +27,29 @@ export function MembersPanel({ projectId, members, mayEdit, selfId }: { projectI
               <span className="block truncate text-xs text-tin">{m.email} · {roleLabels[m.role as Role] ?? m.role}</span>
             </span>
             {mayEdit && m.id !== selfId && (
-              <button type="button" className="btn py-1 text-xs" disabled={pending} aria-label={`Remove ${m.name} from the project`} onClick={() => { setError(null); remove.mutate(m.id, { onError }); }}>
-                Remove
-              </button>
+              <ConfirmButton
+                label="Remove"
+                className="btn py-1 text-xs"
+                ariaLabel={`Remove ${m.name} from the project`}
+                title={`Remove ${m.name} from the project?`}
+                confirmLabel="Remove from the project"
+                danger
+                disabled={pending}
+                onConfirm={async () => {
+                  setError(null);
+                  await remove.mutateAsync(m.id);
+                  setNotice(`${m.name} was removed from the project.`);
+                }}
+              >
+                <p><bdi className="font-semibold">{m.name}</bdi> ({roleLabels[m.role as Role] ?? m.role}) no longer sees this project or its schemes.</p>
+                <p className="text-ink-soft">What they wrote stays. You can add them again by e-mail.</p>
+              </ConfirmButton>
             )}
           </li>
         ))}
         {members.length === 0 && <li className="px-4 py-3 text-tin">No members yet.</li>}
       </ul>
+      {notice && <p role="status" className="border-t border-tin-rule px-4 py-2 text-sm text-fit"><span aria-hidden="true">✓ </span>{notice}</p>}
       {mayEdit && (
         <form
           className="border-t border-tin-rule px-4 py-3"
@@ -42,7 +59,8 @@ export function MembersPanel({ projectId, members, mayEdit, selfId }: { projectI
             e.preventDefault();
             if (!email.trim()) return setError("Give the member's e-mail.");
             setError(null);
-            add.mutate(email.trim(), { onSuccess: () => setEmail(""), onError });
+            setNotice(null);
+            add.mutate(email.trim(), { onSuccess: () => { setNotice(`${email.trim()} was added to the project.`); setEmail(""); }, onError });
           }}
         >
           <label className="label" htmlFor="member-email">Add by e-mail</label>

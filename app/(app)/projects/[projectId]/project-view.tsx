@@ -44,7 +44,7 @@ export function ProjectView({ projectId, can }: { projectId: string; can: Projec
             {project.archived && <span className="ml-2 rounded border border-tin-rule px-1 text-xs text-tin">▣ Archived</span>}
           </p>
         </div>
-        {can.editProject && <ArchiveButton projectId={project.id} archived={project.archived} />}
+        {can.editProject && <ArchiveButton projectId={project.id} projectName={project.name} archived={project.archived} />}
       </div>
       <ProjectLinks projectId={project.id} role={can.role} />
       <div className="grid gap-6 xl:grid-cols-[1fr_26rem]">
