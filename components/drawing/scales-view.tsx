@@ -2,12 +2,11 @@
 /**
  * The editor's Scales tab: a division's scaling chart with a rank's scale beside it, and a scale
  * fitted from survey measurements. Every change is an ordinary edit of the document (`onChange`),
- * so it saves, undoes, keeps revisions and meets conflicts like any other; the chart, the figures
- * and the chests follow from the same document in the same render.
+ * so it saves, undoes, keeps revisions and meets conflicts like any other; the chart follows the
+ * document in the same render, the figures when the estimate worker answers.
  */
 import Link from "next/link";
 import { useMemo, useState } from "react";
-import { planScheme } from "@/lib/estimate/pipes";
 import { parseCompass } from "@/lib/estimate/notes";
 import { parseFootage, semitonesAbove8ft } from "@/lib/estimate/pitch";
 import { deviationHt, fitScale, RANK_C_MIDI, type FitResult } from "@/lib/drawing/scale-fit";
@@ -16,9 +15,10 @@ import { midiToNote, noteToMidi } from "@/lib/estimate/notes";
 import { scalingChart } from "@/lib/drawing/scaling-chart";
 import { lengthIn, lengthToMm, lengthUnitLabel, type DrawingUnits } from "@/lib/drawing/units";
 import type { DrawingRules } from "@/lib/spec/estimate";
-import type { DocStop, SchemeDocument } from "@/lib/spec/document";
+import type { DocStop, SchemeDocument, Tuning } from "@/lib/spec/document";
 import { findStop, updateStop } from "@/components/spec/doc-ops";
 import { footageText, noteText } from "@/components/spec/format";
+import { useDrawingScheme } from "@/components/spec/drawing-scheme";
 import type { Figures } from "@/components/spec/use-figures";
 import { ScalingChartSvg, signedHt, type Overlay } from "./scaling-chart-svg";
 
@@ -61,10 +61,12 @@ export function readScale(d: ScaleDraft): { ok: true; scale: DocStop["scale"] } 
 }
 
 export function ScalesView({
-  doc, figures, rules, units, editable, projectId, schemeId, onChange,
+  doc, tuning, figures, rules, units, editable, projectId, schemeId, onChange,
 }: {
   doc: SchemeDocument;
-  figures: Figures;
+  tuning: Tuning;
+  /** Null until the estimate worker first answers. */
+  figures: Figures | null;
   rules: DrawingRules;
   units: DrawingUnits;
   editable: boolean;
@@ -78,11 +80,12 @@ export function ScalesView({
   const [stopId, setStopId] = useState<string>(scalable[0]?.id ?? "");
   const stop = scalable.find((s) => s.id === stopId) ?? scalable[0];
 
+  const parsed = useDrawingScheme(doc, tuning, figures);
   const chart = useMemo(() => {
-    if (!figures.ok || !division) return null;
-    if (!figures.scheme.divisions.some((d) => d.id === division.id)) return null;
-    return scalingChart(figures.scheme, division.id, rules, planScheme(figures.scheme));
-  }, [figures, division, rules]);
+    if (!parsed || !division) return null;
+    if (!parsed.scheme.divisions.some((d) => d.id === division.id)) return null;
+    return scalingChart(parsed.scheme, division.id, rules, parsed.plan);
+  }, [parsed, division, rules]);
 
   if (!division) return <div className="panel p-4 text-sm">Add a division to see its scales.</div>;
   return (
@@ -105,7 +108,11 @@ export function ScalesView({
           {chart ? (
             <ScalingChartSvg chart={chart} selected={stop?.id} overlay={stop ? surveyOverlay(stop) : null} />
           ) : (
-            <p className="text-sm text-caution" role="status">The chart waits for the scheme to be complete: {figures.ok ? "" : figures.messages[0]}</p>
+            figures ? (
+              <p className="text-sm text-caution" role="status">The chart waits for the scheme to be complete: {figures.ok ? "" : figures.messages[0]}</p>
+            ) : (
+              <p className="text-sm text-tin" role="status" aria-busy="true">Working out the scales…</p>
+            )
           )}
         </div>
         {stop && (

@@ -16,18 +16,16 @@ import {
   type UniqueIdentifier,
 } from "@dnd-kit/core";
 import { horizontalListSortingStrategy, SortableContext } from "@dnd-kit/sortable";
-import { useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from "react";
-import type { EstimateWithoutMoney } from "@/lib/spec/estimate";
-
-type DivisionEstimate = EstimateWithoutMoney["divisions"][number];
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from "react";
 import type { SchemeDocument } from "@/lib/spec/document";
-import { DivisionColumn } from "./division-column";
-import { findStop, moveDivision, moveStop } from "./doc-ops";
+import type { ColumnFigures } from "./board-figures";
 import { CarryContext } from "./carry-context";
-import { carryPlace, carryStep, isCarryKey, type Carried } from "./keyboard-carry";
+import { DivisionColumn } from "./division-column";
+import { DivisionPicker } from "./division-picker";
+import { findStop, moveDivision, moveStop } from "./doc-ops";
 import { pitchText } from "./format";
+import { carryPlace, carryStep, isCarryKey, type Carried } from "./keyboard-carry";
 import { Pitch } from "./pitch";
-import type { StopPipes } from "./stop-card";
 import { Treatment } from "./treatment-mark";
 
 /** A drag by the pointer (dnd-kit) or a carry by the keyboard (keyboard-carry.ts): the board shows `doc` meanwhile. */
@@ -36,37 +34,51 @@ type DragState = { type: "stop" | "division"; id: string; doc: SchemeDocument; b
 const idOf = (dndId: UniqueIdentifier) => String(dndId).replace(/^(stop|div):/, "");
 const typeOf = (dndId: UniqueIdentifier) => (String(dndId).startsWith("div:") ? "division" : "stop");
 
-/** Divisions are sorted among themselves; a stop lands on a stop, or on an empty division. */
+/** Where a stop dragged by the pointer would land: a division and an index in its list as shown (the dragged card counted). */
+type DropAt = { divisionId: string; index: number };
+
+/**
+ * Divisions are sorted among themselves; a stop is over the column under the pointer (or the
+ * nearest). Only the columns are drop targets, so crossing stops changes nothing dnd-kit tracks.
+ */
 const collision: CollisionDetection = (args) => {
-  if (typeOf(args.active.id) === "division") {
-    return closestCenter({ ...args, droppableContainers: args.droppableContainers.filter((c) => typeOf(c.id) === "division") });
-  }
-  const within = pointerWithin(args);
-  if (within.length) {
-    const stops = within.filter((c) => typeOf(c.id) === "stop");
-    return stops.length ? stops : within;
-  }
-  return closestCorners(args);
+  const columns = args.droppableContainers.filter((c) => typeOf(c.id) === "division");
+  if (typeOf(args.active.id) === "division") return closestCenter({ ...args, droppableContainers: columns });
+  const within = pointerWithin({ ...args, droppableContainers: columns });
+  return within.length ? within : closestCorners({ ...args, droppableContainers: columns });
 };
+
+/** The index in `divisionId`'s list as shown before which a card dropped at `clientY` goes. */
+function dropIndexAt(board: HTMLElement, divisionId: string, clientY: number): number {
+  const list = board.querySelector(`[data-division-id="${CSS.escape(divisionId)}"] ol`);
+  if (!list) return 0;
+  const cards = list.querySelectorAll<HTMLElement>(":scope > li[data-stop-id]");
+  let i = 0;
+  for (const card of cards) {
+    const r = card.getBoundingClientRect();
+    if (clientY < r.top + r.height / 2) break;
+    i++;
+  }
+  return i;
+}
 
 export function DivisionBoard({
   doc,
-  divisionFigures,
-  pipesById,
+  columnFigures,
   editable,
   onChange,
   onEditDivision,
   onAddStop,
-  onEditStop,
+  onOpenStop,
 }: {
   doc: SchemeDocument;
-  divisionFigures: Map<string, DivisionEstimate>;
-  pipesById: Map<string, StopPipes>;
+  columnFigures: Map<string, ColumnFigures>;
   editable: boolean;
   onChange: (doc: SchemeDocument, label: string) => void;
+  /** Stable callbacks (the columns are memoised on them). */
   onEditDivision: (divisionId: string) => void;
   onAddStop: (divisionId: string) => void;
-  onEditStop: (stopId: string) => void;
+  onOpenStop: (stopId: string) => void;
 }) {
   const [drag, setDragState] = useState<DragState | null>(null);
   // The latest state at once, so keys that arrive before React re-renders each build on the last.
@@ -75,12 +87,57 @@ export function DivisionBoard({
     dragRef.current = next;
     setDragState(next);
   };
+  const [dropAt, setDropAtState] = useState<DropAt | null>(null);
+  const dropRef = useRef<DropAt | null>(null);
+  const setDropAt = useCallback((next: DropAt | null) => {
+    const prev = dropRef.current;
+    if (prev === next || (prev && next && prev.divisionId === next.divisionId && prev.index === next.index)) return;
+    dropRef.current = next;
+    setDropAtState(next);
+  }, []);
   const [spoken, setSpoken] = useState("");
+  const [picked, setPicked] = useState<string | null>(null);
   const boardRef = useRef<HTMLDivElement>(null);
   const focusAfter = useRef<string | null>(null);
   const shown = drag?.doc ?? doc;
+  const pickedId = shown.divisions.some((d) => d.id === picked) ? picked : (shown.divisions[0]?.id ?? null);
   // The pointer only: the keyboard carries through onBoardKeyDown, which never loses a key.
   const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 4 } }));
+
+  // While a stop is dragged, where it would land follows the pointer: read once a frame from the
+  // cards of the column under it, set only when it changes (one column redraws its drop line).
+  const pointer = useRef<{ y: number; over: string | null; frame: number }>({ y: 0, over: null, frame: 0 });
+  const place = useCallback(() => {
+    pointer.current.frame = 0;
+    const d = dragRef.current;
+    const board = boardRef.current;
+    const over = pointer.current.over;
+    if (!d || d.by !== "pointer" || d.type !== "stop" || !board || !over) return setDropAt(null);
+    let index = dropIndexAt(board, over, pointer.current.y);
+    const from = findStop(d.doc, d.id);
+    // Just before or after itself is where it already is: no line.
+    if (from && from.division.id === over && (index === from.index || index === from.index + 1)) index = -1;
+    setDropAt(index < 0 ? { divisionId: over, index: -1 } : { divisionId: over, index });
+  }, [setDropAt]);
+  const schedule = useCallback(() => {
+    if (!pointer.current.frame) pointer.current.frame = requestAnimationFrame(place);
+  }, [place]);
+  const draggingStop = drag?.by === "pointer" && drag.type === "stop";
+  useEffect(() => {
+    if (!draggingStop) return;
+    const onMove = (e: PointerEvent) => {
+      pointer.current.y = e.clientY;
+      schedule();
+    };
+    window.addEventListener("pointermove", onMove, { passive: true, capture: true });
+    window.addEventListener("scroll", schedule, { passive: true, capture: true });
+    return () => {
+      window.removeEventListener("pointermove", onMove, { capture: true });
+      window.removeEventListener("scroll", schedule, { capture: true });
+      if (pointer.current.frame) cancelAnimationFrame(pointer.current.frame);
+      pointer.current.frame = 0;
+    };
+  }, [draggingStop, schedule]);
 
   const nameOf = useMemo(() => {
     return (dndId: UniqueIdentifier | undefined): string => {
@@ -99,17 +156,9 @@ export function DivisionBoard({
     onDragCancel: ({ active }) => `Moving ${nameOf(active.id)} cancelled; it is back where it was.`,
   };
 
-  function target(d: SchemeDocument, overId: UniqueIdentifier): { divisionId: string; index: number } | null {
-    const id = idOf(overId);
-    if (typeOf(overId) === "division") {
-      const division = d.divisions.find((x) => x.id === id);
-      return division ? { divisionId: id, index: division.stops.length } : null;
-    }
-    const found = findStop(d, id);
-    return found ? { divisionId: found.division.id, index: found.index } : null;
-  }
-
   function onDragStart(e: DragStartEvent) {
+    const start = e.activatorEvent as PointerEvent | null;
+    pointer.current = { y: start?.clientY ?? 0, over: null, frame: 0 };
     setDrag({ type: typeOf(e.active.id), id: idOf(e.active.id), doc, by: "pointer" });
   }
 
@@ -151,6 +200,9 @@ export function DivisionBoard({
       }
       focusAfter.current = carried.id;
       setDrag({ ...carried, doc: next });
+      // On a phone the board shows one division: it follows a stop carried to another.
+      const now = carried.type === "stop" ? findStop(next, carried.id)?.division.id : null;
+      if (now) setPicked(now);
       setSpoken(`${nameOf(dndId)}: ${carryPlace(next, carried)}.`);
     } else if (key === " " || key === "Enter") {
       e.preventDefault();
@@ -179,18 +231,27 @@ export function DivisionBoard({
     if (!dragRef.current) focusAfter.current = null;
   });
 
-  // Crossing into another division moves the stop there at once, so the columns make room for it.
   function onDragOver(e: DragOverEvent) {
-    if (!drag || drag.type !== "stop" || !e.over) return;
-    const from = findStop(drag.doc, drag.id);
-    const to = target(drag.doc, e.over.id);
-    if (!from || !to || from.division.id === to.divisionId) return;
-    setDrag({ ...drag, doc: moveStop(drag.doc, drag.id, to.divisionId, to.index) });
+    if (dragRef.current?.type !== "stop") return;
+    pointer.current.over = e.over ? idOf(e.over.id) : null;
+    schedule();
+  }
+
+  function endPointerDrag() {
+    setDrag(null);
+    setDropAt(null);
+    pointer.current.over = null;
   }
 
   function onDragEnd(e: DragEndEvent) {
-    const state = drag;
-    setDrag(null);
+    const state = dragRef.current;
+    // The last pointer position counts, even if its frame has not come yet.
+    if (state?.type === "stop" && pointer.current.frame) {
+      cancelAnimationFrame(pointer.current.frame);
+      place();
+    }
+    const at = dropRef.current;
+    endPointerDrag();
     if (!state || !e.over) return;
     if (state.type === "division") {
       const from = doc.divisions.findIndex((d) => d.id === state.id);
@@ -198,10 +259,12 @@ export function DivisionBoard({
       if (from >= 0 && to >= 0 && from !== to) onChange(moveDivision(doc, from, to), `Moved the ${doc.divisions[from].name}`);
       return;
     }
-    let d = state.doc;
-    const to = target(d, e.over.id);
-    if (to && typeOf(e.over.id) === "stop") d = moveStop(d, state.id, to.divisionId, to.index);
-    commitStop(state.id, d);
+    if (!at || at.index < 0) return;
+    const from = findStop(doc, state.id);
+    if (!from) return;
+    // moveStop counts the target's stops without the moved one.
+    const index = from.division.id === at.divisionId && from.index < at.index ? at.index - 1 : at.index;
+    commitStop(state.id, moveStop(doc, state.id, at.divisionId, index));
   }
 
   const activeStop = drag?.by === "pointer" && drag.type === "stop" ? findStop(shown, drag.id)?.stop : undefined;
@@ -211,6 +274,7 @@ export function DivisionBoard({
   const carriedId = carriedBy?.id;
   // One object per carried item, not per step, so the cards re-render only when it changes.
   const carried = useMemo<Carried | null>(() => (carriedType && carriedId ? { type: carriedType, id: carriedId } : null), [carriedType, carriedId]);
+  const activeType = drag?.type ?? null;
 
   return (
     <DndContext
@@ -220,7 +284,7 @@ export function DivisionBoard({
       onDragStart={onDragStart}
       onDragOver={onDragOver}
       onDragEnd={onDragEnd}
-      onDragCancel={() => setDrag(null)}
+      onDragCancel={endPointerDrag}
       accessibility={{
         announcements,
         screenReaderInstructions: {
@@ -229,20 +293,28 @@ export function DivisionBoard({
       }}
     >
       <p className="sr-only" aria-live="assertive" data-testid="carry-status">{spoken}</p>
+      <DivisionPicker divisions={shown.divisions} columnFigures={columnFigures} picked={pickedId} onPick={setPicked} boardRef={boardRef} />
       <CarryContext.Provider value={carried}>
       <SortableContext items={shown.divisions.map((d) => `div:${d.id}`)} strategy={horizontalListSortingStrategy}>
-        <div ref={boardRef} onKeyDown={onBoardKeyDown} className="flex items-start gap-3 overflow-x-auto pb-3" data-testid="board" data-carrying={carried ? carried.id : undefined}>
+        <div
+          ref={boardRef}
+          onKeyDown={onBoardKeyDown}
+          className="board-scroll flex flex-col gap-3 pb-3 md:grid md:auto-cols-[minmax(15rem,20rem)] md:grid-flow-col md:items-start md:overflow-x-auto"
+          data-testid="board"
+          data-carrying={carried ? carried.id : undefined}
+        >
           {shown.divisions.map((division) => (
             <DivisionColumn
               key={division.id}
               division={division}
-              figures={divisionFigures.get(division.id)}
-              pipesById={pipesById}
+              figures={columnFigures.get(division.id)}
               editable={editable}
-              activeType={drag?.type ?? null}
-              onEditDivision={() => onEditDivision(division.id)}
-              onAddStop={() => onAddStop(division.id)}
-              onEditStop={onEditStop}
+              activeType={activeType}
+              dropIndex={dropAt?.divisionId === division.id ? dropAt.index : null}
+              picked={division.id === pickedId}
+              onEditDivision={onEditDivision}
+              onAddStop={onAddStop}
+              onOpenStop={onOpenStop}
             />
           ))}
         </div>
@@ -250,7 +322,7 @@ export function DivisionBoard({
       </CarryContext.Provider>
       <DragOverlay dropAnimation={null}>
         {activeStop ? (
-          <div className="w-[17rem] rounded border border-brass bg-paper-card px-2 py-1.5 shadow-lg">
+          <div className="w-[15rem] rounded border border-brass bg-paper-card px-2 py-1.5 shadow-lg">
             <div className="flex items-baseline gap-2 font-serif text-[15px] font-semibold">
               {activeStop.name}
               <Pitch stop={activeStop} className="ml-auto" />
@@ -258,7 +330,7 @@ export function DivisionBoard({
             <div className="text-xs text-ink-soft"><Treatment stop={activeStop} /></div>
           </div>
         ) : activeDivision ? (
-          <div className="w-72 rounded-md border border-brass bg-paper-deep px-3 py-2 shadow-lg">
+          <div className="w-60 rounded-md border border-brass bg-paper-deep px-3 py-2 shadow-lg">
             <span className="font-serif text-lg font-semibold">{activeDivision.name}</span>
             <span className="ml-2 text-xs text-tin">{activeDivision.stops.length} stops</span>
           </div>

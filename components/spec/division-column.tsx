@@ -1,14 +1,12 @@
 "use client";
-import { SortableContext, useSortable, verticalListSortingStrategy } from "@dnd-kit/sortable";
+import { useSortable } from "@dnd-kit/sortable";
 import { CSS } from "@dnd-kit/utilities";
+import { Fragment, memo } from "react";
 import { StateMark } from "@/components/ui/state-mark";
-import type { EstimateWithoutMoney } from "@/lib/spec/estimate";
-
-type DivisionEstimate = EstimateWithoutMoney["divisions"][number];
 import type { DocDivision } from "@/lib/spec/document";
-import { chestWords, fitState } from "./chest-words";
+import type { ColumnFigures } from "./board-figures";
 import { actionLabels, compassText, formatNumber, windText } from "./format";
-import { DragHandle, StopCard, type StopPipes } from "./stop-card";
+import { DragHandle, StopCard } from "./stop-card";
 
 /** A swell box: a box with shutters, our mark for an enclosed division. */
 function EnclosedMark() {
@@ -20,40 +18,51 @@ function EnclosedMark() {
   );
 }
 
-export function DivisionColumn({
+/** Where a dragged stop would land: a brass line between cards. */
+function DropLine() {
+  return <li aria-hidden="true" className="-my-1 h-1 rounded bg-brass" data-testid="drop-line" />;
+}
+
+/**
+ * One division on the board. Memoised: it is drawn again only when its division, its figures, the
+ * drop line in it or the kind of drag changes, never for a move in another column. On a phone only
+ * the division picked in the picker is shown.
+ */
+export const DivisionColumn = memo(function DivisionColumn({
   division,
   figures,
-  pipesById,
   editable,
   activeType,
+  dropIndex,
+  picked,
   onEditDivision,
   onAddStop,
-  onEditStop,
+  onOpenStop,
 }: {
   division: DocDivision;
-  figures: DivisionEstimate | undefined;
-  pipesById: Map<string, StopPipes>;
+  figures: ColumnFigures | undefined;
   editable: boolean;
   activeType: "stop" | "division" | null;
-  onEditDivision: () => void;
-  onAddStop: () => void;
-  onEditStop: (stopId: string) => void;
+  /** Where a stop dragged by the pointer would go, as an index in this column's list; null when not here. */
+  dropIndex: number | null;
+  /** The division shown on a phone. */
+  picked: boolean;
+  onEditDivision: (divisionId: string) => void;
+  onAddStop: (divisionId: string) => void;
+  onOpenStop: (stopId: string) => void;
 }) {
-  const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging } = useSortable({
+  const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging, isOver } = useSortable({
     id: `div:${division.id}`,
     data: { type: "division", divisionId: division.id },
-    // While a stop is carried, only an empty column takes it as a whole; otherwise its stops do.
-    disabled: editable ? { draggable: false, droppable: activeType === "stop" && division.stops.length > 0 } : true,
+    disabled: editable ? { draggable: false, droppable: false } : true,
   });
-  const fit = figures?.chest.fit ?? null;
-  const hasChest = (figures?.chest.main.rows ?? 0) > 0;
-  const state = fitState(fit, hasChest);
-  const words = figures ? chestWords(figures.chest.main, figures.chest.space, fit) : "";
+  const state = figures?.fit ?? "unknown";
+  const stopOver = activeType === "stop" && dropIndex !== null;
   return (
     <section
       ref={setNodeRef}
       style={{ transform: CSS.Translate.toString(transform), transition }}
-      className={`flex w-72 shrink-0 flex-col rounded-md border bg-paper-deep/60 ${isDragging ? "z-20 border-brass opacity-90 shadow-lg" : state === "clash" ? "border-clash" : "border-tin-rule"}`}
+      className={`${picked ? "flex" : "hidden"} min-w-0 flex-col rounded-md border bg-paper-deep/60 md:flex ${isDragging ? "z-20 border-brass opacity-90 shadow-lg" : stopOver || (isOver && activeType === "stop") ? "border-brass" : state === "clash" ? "border-clash" : "border-tin-rule"}`}
       data-testid={`division-${division.name}`}
       data-division-id={division.id}
       aria-labelledby={`div-title-${division.id}`}
@@ -61,9 +70,9 @@ export function DivisionColumn({
       <header className="border-b border-tin-rule px-2.5 pb-2 pt-2">
         <div className="flex items-center gap-1.5">
           {editable && <DragHandle label={`Move division ${division.name}`} carry={{ type: "division", id: division.id }} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />}
-          <h3 id={`div-title-${division.id}`} className="min-w-0 flex-1 truncate text-lg font-semibold">{division.name}</h3>
+          <h3 id={`div-title-${division.id}`} className="min-w-0 flex-1 truncate text-lg font-semibold" title={division.name}>{division.name}</h3>
           {editable && (
-            <button type="button" className="btn px-2 py-0.5 text-xs" onClick={onEditDivision} aria-label={`Edit division ${division.name}`}>
+            <button type="button" className="btn px-2 py-0.5 text-xs" onClick={() => onEditDivision(division.id)} aria-label={`Edit division ${division.name}`}>
               Edit
             </button>
           )}
@@ -80,47 +89,40 @@ export function DivisionColumn({
           {division.enclosed && (
             <span className="inline-flex items-center gap-1 text-ink" data-testid={`enclosed-${division.name}`}><EnclosedMark />Enclosed</span>
           )}
-          {figures && (
-            <span className="num text-tin">
-              {division.stops.length} {division.stops.length === 1 ? "stop" : "stops"} · {formatNumber(figures.pipes.total)} {figures.pipes.total === 1 ? "pipe" : "pipes"}
-            </span>
-          )}
+          <span className="num text-tin">
+            {division.stops.length} {division.stops.length === 1 ? "stop" : "stops"}
+            {figures && <> · {formatNumber(figures.pipesTotal)} {figures.pipesTotal === 1 ? "pipe" : "pipes"}</>}
+          </span>
         </div>
-        {figures && hasChest && (
+        {figures?.hasChest && (
           <p
             className={`mt-1.5 flex items-start gap-1 text-xs ${state === "clash" ? "font-semibold text-clash" : state === "fit" ? "text-fit" : "text-tin"}`}
             data-testid={`fit-${division.name}`}
             data-fits={state}
-            title={words}
+            title={figures.words}
           >
             <StateMark kind={state} className="mt-px h-3.5 w-3.5" />
             {state === "clash" ? "Chest does not fit" : state === "fit" ? "Chest fits" : "Chest space not given"}
           </p>
         )}
       </header>
-      <SortableContext items={division.stops.map((s) => `stop:${s.id}`)} strategy={verticalListSortingStrategy}>
-        <ol className="flex min-h-16 flex-1 flex-col gap-1.5 p-2" aria-label={`Stops of the ${division.name}`}>
-          {division.stops.map((s) => (
-            <StopCard
-              key={s.id}
-              stop={s}
-              pipes={pipesById.get(s.id)}
-              divisionName={division.name}
-              editable={editable}
-              disabledDrop={activeType === "division"}
-              onEdit={onEditStop}
-            />
-          ))}
-          {division.stops.length === 0 && <li className="rounded border border-dashed border-tin-rule px-2 py-3 text-center text-xs text-tin">No stops yet{editable ? " — add one or drag one here" : ""}.</li>}
-        </ol>
-      </SortableContext>
+      <ol className="flex min-h-16 flex-1 flex-col gap-1.5 p-2" aria-label={`Stops of the ${division.name}`}>
+        {division.stops.map((s, i) => (
+          <Fragment key={s.id}>
+            {dropIndex === i && <DropLine />}
+            <StopCard stop={s} pipesText={figures?.pipesText[s.id] ?? "– pipes"} divisionName={division.name} editable={editable} onOpen={onOpenStop} />
+          </Fragment>
+        ))}
+        {dropIndex !== null && dropIndex >= division.stops.length && <DropLine />}
+        {division.stops.length === 0 && <li className="rounded border border-dashed border-tin-rule px-2 py-3 text-center text-xs text-tin">No stops yet{editable ? " — add one or drag one here" : ""}.</li>}
+      </ol>
       {editable && (
         <div className="border-t border-tin-rule p-2">
-          <button type="button" className="btn w-full justify-center py-1 text-xs" onClick={onAddStop} aria-label={`Add a stop to the ${division.name}`}>
+          <button type="button" className="btn w-full justify-center py-1 text-xs" onClick={() => onAddStop(division.id)} aria-label={`Add a stop to the ${division.name}`}>
             + Add stop
           </button>
         </div>
       )}
     </section>
   );
-}
+});

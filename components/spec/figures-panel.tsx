@@ -27,11 +27,26 @@ function Row({ label, value, strong = false, testId }: { label: string; value: s
   );
 }
 
-/** The estimator's figures for the document as it stands, recomputed on every change. */
-export function FiguresPanel({ figures, showMoney }: { figures: Figures; showMoney: boolean }) {
+/**
+ * The estimator's figures for the document as it stands, recomputed on every change (in a worker):
+ * while they are behind the document they are marked "updating", and before the first arrive the
+ * panel says it is working them out.
+ */
+export function FiguresPanel({ figures, showMoney, stale = false }: { figures: Figures | null; showMoney: boolean; stale?: boolean }) {
+  if (!figures) {
+    return (
+      <section className="panel p-3 text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="pending" data-stale="true" aria-busy="true">
+        <h2 id="figures-heading" className="mb-2 text-lg font-semibold">Figures</h2>
+        <p className="text-tin">Working out the figures…</p>
+        <div className="mt-3 space-y-2" aria-hidden="true">
+          {[80, 65, 90, 55, 70, 85].map((w, i) => <div key={i} className="h-3 animate-pulse rounded bg-paper-deep" style={{ width: `${w}%` }} />)}
+        </div>
+      </section>
+    );
+  }
   if (!figures.ok) {
     return (
-      <section className="panel p-3 text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="incomplete">
+      <section className="panel p-3 text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="incomplete" data-stale={stale ? "true" : undefined}>
         <h2 id="figures-heading" className="mb-1 text-lg font-semibold">Figures</h2>
         <p className="flex items-start gap-1.5 text-caution"><StateMark kind="caution" className="mt-0.5" />The figures wait for the scheme to be complete:</p>
         <ul className="mt-1 list-disc space-y-0.5 pl-5 text-xs text-ink-soft" data-testid="figures-messages">
@@ -46,10 +61,10 @@ export function FiguresPanel({ figures, showMoney }: { figures: Figures; showMon
   const metals = (Object.entries(t.metalKg) as [keyof typeof materialLabels, number][]).filter(([, kg]) => kg > 0);
   const woods = (Object.entries(t.woodM3) as [keyof typeof materialLabels, number][]).filter(([, m3]) => m3 > 0);
   return (
-    <section className="panel text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="ok">
+    <section className="panel text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="ok" data-stale={stale ? "true" : undefined} data-estimate-ms={figures.ms.toFixed(1)} aria-busy={stale || undefined}>
       <div className="flex items-baseline border-b border-tin-rule px-3 py-2">
         <h2 id="figures-heading" className="flex-1 text-lg font-semibold">Figures</h2>
-        <span className="text-xs text-tin" title="Computed in the browser on every change">live</span>
+        <span className={`text-xs ${stale ? "text-caution" : "text-tin"}`} title="Computed in the browser on every change">{stale ? "updating…" : "live"}</span>
       </div>
       {clashes.length > 0 && (
         <p role="alert" className="flex items-start gap-1.5 border-b border-clash/40 bg-clash-light px-3 py-2 font-semibold text-clash" data-testid="fit-warning">

@@ -14,21 +14,24 @@ import { ChestsView } from "./chests-view";
 import { ScalesView } from "@/components/drawing/scales-view";
 import { DivisionBoard } from "./division-board";
 import { DivisionForm } from "./division-form";
-import { addDivision, addStop, findStop, newId, removeDivision, removeStop, setAccessories, setWorks, updateDivision, updateStop } from "./doc-ops";
+import { useColumnFigures } from "./board-figures";
+import { addDivision, addStop, findStop, moveStop, newId, removeDivision, removeStop, setAccessories, setWorks, updateDivision, updateStop } from "./doc-ops";
 import { FiguresPanel } from "./figures-panel";
 import { formatDateTime, formatTimeOfDay, pitchText } from "./format";
-import { historyReducer, initHistory } from "./history";
+import { historyReducer, initHistory, nextRedo, nextUndo } from "./history";
 import { RevisionsPanel } from "./revisions-panel";
 import { SaveStateBadge } from "./save-state";
+import { StopDetails } from "./stop-details";
 import { StopForm } from "./stop-form";
-import type { StopPipes } from "./stop-card";
-import { drawingRulesOf, stopPipesById, useFigures, type FigureSource } from "./use-figures";
+import { drawingRulesOf, useFigures, type FigureSource } from "./use-figures";
 import { clearDraft, readDraft, sameDocument, type UnsavedDraft } from "./unsaved-drafts";
 import { useLeaveGuard } from "./use-leave-guard";
 import { useSchemeSave, type SaveState } from "./use-scheme-save";
 
 type Editing =
   | { kind: "stop"; divisionId: string; stopId?: string; newId: string }
+  /** A reader who does not edit opens a stop to read its details. */
+  | { kind: "view"; stopId: string }
   | { kind: "division"; divisionId?: string; newId: string }
   | { kind: "details" }
   | null;
@@ -88,7 +91,9 @@ export function SchemeEditor({
   const doc = history.present;
   const save = useSchemeSave({ scheme: initialScheme, present: doc, label: history.label, enabled: editable });
   const { saveNow } = save;
-  const figures = useFigures(doc, initialScheme.tuning, figureSource);
+  const { figures, stale } = useFigures(doc, initialScheme.tuning, figureSource);
+  const columnFigures = useColumnFigures(figures);
+  const [figuresOpen, setFiguresOpen] = useState(false);
   const [tab, setTab] = useState<Tab>("stops");
   const [editing, setEditing] = useState<Editing>(null);
   const [showRevisions, setShowRevisions] = useState(false);
@@ -126,14 +131,24 @@ export function SchemeEditor({
     dispatch({ type: "edit", doc: next, label });
     setNotice(label);
   }, []);
-  const undo = useCallback(() => dispatch({ type: "undo" }), []);
-  // Stable, so the memoised stop cards do not re-render when the editor does; the stop's
+  // Undo and redo say what they took back or put again (the history's label); other notices clear.
+  const undo = useCallback(() => {
+    dispatch({ type: "undo" });
+    setNotice(null);
+  }, []);
+  // Stable, so the memoised columns and cards do not re-render when the editor does; the stop's
   // division is looked up when the form opens.
-  const editStop = useCallback((stopId: string) => setEditing({ kind: "stop", divisionId: "", stopId, newId: "" }), []);
-  const redo = useCallback(() => dispatch({ type: "redo" }), []);
+  const openStop = useCallback(
+    (stopId: string) => setEditing(editable ? { kind: "stop", divisionId: "", stopId, newId: "" } : { kind: "view", stopId }),
+    [editable],
+  );
+  const editDivision = useCallback((divisionId: string) => setEditing({ kind: "division", divisionId, newId: "" }), []);
+  const addStopTo = useCallback((divisionId: string) => setEditing({ kind: "stop", divisionId, newId: newId("stop") }), []);
+  const redo = useCallback(() => {
+    dispatch({ type: "redo" });
+    setNotice(null);
+  }, []);
 
-  const pipesById = useMemo(() => stopPipesById(figures) as Map<string, StopPipes>, [figures]);
-  const divisionFigures = useMemo(() => new Map(figures.ok ? figures.estimate.divisions.map((d) => [d.id, d]) : []), [figures]);
 
   // Ctrl+Z / Ctrl+Shift+Z (and Ctrl+Y) undo and redo; inside a text field the field's own undo wins.
   useEffect(() => {
@@ -176,6 +191,7 @@ export function SchemeEditor({
   }, [doc]);
 
   const editingStop = editing?.kind === "stop" && editing.stopId ? findStop(doc, editing.stopId) : null;
+  const viewingStop = editing?.kind === "view" ? findStop(doc, editing.stopId) : null;
   const editingDivision = editing?.kind === "division" && editing.divisionId ? doc.divisions.find((d) => d.id === editing.divisionId) : undefined;
   const targetDivision = editing?.kind === "stop" ? (editingStop?.division ?? doc.divisions.find((d) => d.id === editing.divisionId)) : undefined;
 
@@ -202,10 +218,10 @@ export function SchemeEditor({
           {editable ? <SaveStateBadge state={state} version={save.version} /> : <span className="text-sm text-tin" data-testid="save-state" data-state="read-only">Read only · v{save.version}</span>}
           {editable && (
             <>
-              <button type="button" className="btn" onClick={undo} disabled={history.past.length === 0} aria-keyshortcuts="Control+Z" title="Undo (Ctrl+Z)">
+              <button type="button" className="btn" onClick={undo} disabled={history.past.length === 0} aria-keyshortcuts="Control+Z" title={history.past.length ? `Undo: ${nextUndo(history)} (Ctrl+Z)` : "Nothing to undo"}>
                 ↶ Undo
               </button>
-              <button type="button" className="btn" onClick={redo} disabled={history.future.length === 0} aria-keyshortcuts="Control+Shift+Z" title="Redo (Ctrl+Shift+Z)">
+              <button type="button" className="btn" onClick={redo} disabled={history.future.length === 0} aria-keyshortcuts="Control+Shift+Z" title={history.future.length ? `Redo: ${nextRedo(history)} (Ctrl+Shift+Z)` : "Nothing to redo"}>
                 ↷ Redo
               </button>
               <button type="button" className="btn" onClick={() => void save.saveNow()} disabled={state.kind === "saved" || state.kind === "saving" || state.kind === "conflict"} title="Save now (Ctrl+S)">
@@ -223,8 +239,11 @@ export function SchemeEditor({
         </div>
       </div>
 
-      {notice && editable && state.kind !== "conflict" && (
-        <p className="text-xs text-tin" aria-live="polite" data-testid="last-edit">{notice}</p>
+      {/* The line is always there, so the board does not move down when the first notice appears. */}
+      {editable && (
+        <p className="min-h-4 truncate text-xs leading-4 text-tin" aria-live="polite" data-testid="last-edit">
+          {state.kind !== "conflict" ? (notice ?? history.label ?? "") : ""}
+        </p>
       )}
 
       {draft && (
@@ -320,19 +339,18 @@ export function SchemeEditor({
               ) : (
                 <DivisionBoard
                   doc={doc}
-                  divisionFigures={divisionFigures}
-                  pipesById={pipesById}
+                  columnFigures={columnFigures}
                   editable={editable}
                   onChange={edit}
-                  onEditDivision={(divisionId) => setEditing({ kind: "division", divisionId, newId: "" })}
-                  onAddStop={(divisionId) => setEditing({ kind: "stop", divisionId, newId: newId("stop") })}
-                  onEditStop={editStop}
+                  onEditDivision={editDivision}
+                  onAddStop={addStopTo}
+                  onOpenStop={openStop}
                 />
               ))}
             {tab === "scales" && (
-              <ScalesView doc={doc} figures={figures} rules={drawingRulesOf(figureSource)} units={figureSource.kind === "live" ? figureSource.rates.drawingUnits : "mm"} editable={editable} projectId={projectId} schemeId={initialScheme.id} onChange={edit} />
+              <ScalesView doc={doc} tuning={initialScheme.tuning} figures={figures} rules={drawingRulesOf(figureSource)} units={figureSource.kind === "live" ? figureSource.rates.drawingUnits : "mm"} editable={editable} projectId={projectId} schemeId={initialScheme.id} onChange={edit} />
             )}
-            {tab === "chests" && <ChestsView figures={figures} rates={drawingRulesOf(figureSource)} />}
+            {tab === "chests" && <ChestsView doc={doc} tuning={initialScheme.tuning} figures={figures} rates={drawingRulesOf(figureSource)} />}
             {tab === "accessories" && (
               <AccessoriesEditor key={save.version + ":" + history.past.length} doc={doc} editable={editable} onApply={(acc) => edit(setAccessories(doc, acc), "Changed couplers and accessories")} />
             )}
@@ -361,9 +379,29 @@ export function SchemeEditor({
               }}
             />
           )}
-          {showFigures && <FiguresPanel figures={figures} showMoney={showMoney} />}
+          {showFigures && (
+            <div className="hidden lg:block">
+              <FiguresPanel figures={figures} showMoney={showMoney} stale={stale} />
+            </div>
+          )}
         </div>
       </div>
+
+      {/* Below the wide layout the figures are one tap away, from a bar that stays at the bottom. */}
+      {showFigures && (
+        <>
+          <div className="sticky bottom-0 z-30 -mx-5 border-t border-tin-rule bg-paper-card/95 px-5 py-2 shadow-[0_-2px_6px_rgba(29,36,51,0.08)] lg:hidden print:hidden">
+            <button type="button" className="flex w-full items-center gap-3 text-left text-sm" onClick={() => setFiguresOpen(true)} data-testid="figures-bar" aria-haspopup="dialog">
+              <span className="font-semibold">Figures</span>
+              <FiguresSummary figures={figures} stale={stale} />
+              <span className="ml-auto btn py-1 text-xs">Show</span>
+            </button>
+          </div>
+          <Dialog open={figuresOpen} onClose={() => setFiguresOpen(false)} title="Figures" wide>
+            {figuresOpen && <FiguresPanel figures={figures} showMoney={showMoney} stale={stale} />}
+          </Dialog>
+        </>
+      )}
 
       <Dialog
         open={editing?.kind === "stop"}
@@ -371,6 +409,24 @@ export function SchemeEditor({
         title={editingStop ? `${editingStop.stop.name} ${pitchText(editingStop.stop)} — ${editingStop.division.name}` : `New stop — ${targetDivision?.name ?? ""}`}
         wide
       >
+        {editingStop && editable && doc.divisions.length > 1 && (
+          <div className="mb-3 flex flex-wrap items-center gap-2 border-b border-tin-rule pb-3 text-sm">
+            <label htmlFor="stop-division" className="text-ink-soft">Division</label>
+            <select
+              id="stop-division"
+              className="field w-auto py-1"
+              value={editingStop.division.id}
+              onChange={(e) => {
+                const to = doc.divisions.find((d) => d.id === e.target.value);
+                if (!to) return;
+                edit(moveStop(doc, editingStop.stop.id, to.id, to.stops.length), `Moved ${editingStop.stop.name} ${pitchText(editingStop.stop)} from the ${editingStop.division.name} to the ${to.name}`);
+              }}
+            >
+              {doc.divisions.map((d) => <option key={d.id} value={d.id}>{d.name}</option>)}
+            </select>
+            <span className="text-xs text-tin">Moves it to the end of that division at once (Undo puts it back).</span>
+          </div>
+        )}
         {editing?.kind === "stop" && (
           <StopForm
             initial={editingStop?.stop}
@@ -396,9 +452,29 @@ export function SchemeEditor({
         {editingStop && <StopFiles projectId={projectId} schemeId={initialScheme.id} stopId={editingStop.stop.id} stopName={editingStop.stop.name} mayAdd={editable} />}
       </Dialog>
 
+      <Dialog
+        open={editing?.kind === "view"}
+        onClose={() => setEditing(null)}
+        title={viewingStop ? `${viewingStop.stop.name} ${pitchText(viewingStop.stop)} — ${viewingStop.division.name}` : "Stop"}
+        wide
+      >
+        {viewingStop && (
+          <>
+            <StopDetails
+              stop={viewingStop.stop}
+              division={viewingStop.division}
+              sourceName={viewingStop.stop.source ? (sources.find((x) => x.id === viewingStop.stop.source)?.label ?? null) : null}
+              figures={figures}
+            />
+            <StopFiles projectId={projectId} schemeId={initialScheme.id} stopId={viewingStop.stop.id} stopName={viewingStop.stop.name} mayAdd={false} />
+          </>
+        )}
+      </Dialog>
+
       <Dialog open={editing?.kind === "division"} onClose={() => setEditing(null)} title={editingDivision ? `Division: ${editingDivision.name}` : "New division"} wide>
         {editing?.kind === "division" && (
           <DivisionForm
+            doc={doc}
             initial={editingDivision}
             newId={editing.newId}
             onCancel={() => setEditing(null)}
@@ -457,4 +533,18 @@ function unsavedReason(state: SaveState): string {
     default:
       return "Your changes could not be saved yet.";
   }
+}
+
+/** The bar's one line: pipes and whether every chest fits, so the reason to open the figures shows. */
+function FiguresSummary({ figures, stale }: { figures: ReturnType<typeof useFigures>["figures"]; stale: boolean }) {
+  if (!figures) return <span className="text-tin">working them out…</span>;
+  if (!figures.ok) return <span className="inline-flex items-center gap-1 text-caution"><StateMark kind="caution" />waiting for the scheme to be complete</span>;
+  const t = figures.estimate.totals;
+  const clashes = figures.estimate.divisions.filter((d) => d.chest.fit && !d.chest.fit.fits).length;
+  return (
+    <span className={`num min-w-0 truncate ${stale ? "text-tin" : "text-ink-soft"}`}>
+      {t.stops} stops · {t.pipes.total.toLocaleString("en-GB")} pipes
+      {clashes > 0 && <span className="font-semibold text-clash"> · {clashes} {clashes === 1 ? "chest does" : "chests do"} not fit</span>}
+    </span>
+  );
 }

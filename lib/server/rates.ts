@@ -34,6 +34,6 @@ export async function figureSourceFor(user: SessionUser, scheme: SchemeRead): Pr
   const rates = await firmRates();
   if (can(user.role, "money:read")) return { kind: "live", rates };
   const r = estimateDocument(scheme.document, scheme.tuning, rates);
-  const figures = r.ok ? { ok: true as const, scheme: r.scheme, estimate: estimateWithoutMoney(r.estimate), ms: 0 } : r;
+  const figures = r.ok ? { ok: true as const, estimate: estimateWithoutMoney(r.estimate), ms: 0 } : r;
   return { kind: "fixed", figures, rules: drawingRules(rates) };
 }

@@ -4,6 +4,6 @@ import { drawingRulesOf, useFigures, type FigureSource } from "@/components/spec
 import type { SchemeDocument, Tuning } from "@/lib/spec/document";
 
 export function ChestsClient({ document, tuning, source }: { document: SchemeDocument; tuning: Tuning; source: FigureSource }) {
-  const figures = useFigures(document, tuning, source);
-  return <ChestsView figures={figures} rates={drawingRulesOf(source)} />;
+  const { figures } = useFigures(document, tuning, source);
+  return <ChestsView doc={document} tuning={tuning} figures={figures} rates={drawingRulesOf(source)} />;
 }

@@ -1,0 +1,69 @@
+"use client";
+/**
+ * What the board shows of the figures, per division: small values, the same object while they do
+ * not change, so a column whose division and figures are unchanged is not drawn again after an
+ * edit elsewhere (with 150 stops, a move redraws two columns, not six).
+ */
+import { useState } from "react";
+import { chestWords, fitState, type FitState } from "./chest-words";
+import type { Figures } from "./use-figures";
+
+export type ColumnFigures = {
+  notes: number;
+  pipesTotal: number;
+  fit: FitState;
+  hasChest: boolean;
+  words: string;
+  /** "61 pipes", "no pipes", "12 prepared" by stop id. */
+  pipesText: Readonly<Record<string, string>>;
+};
+
+type StopPipes = { total: number; prepared: number; kind: string };
+
+export function pipesWords(p: StopPipes | undefined): string {
+  if (!p) return "– pipes";
+  if (p.kind === "borrowed") return "no pipes";
+  if (p.kind === "prepared") return `${p.prepared} prepared`;
+  if (p.kind === "removed") return "removed";
+  return `${p.total} ${p.total === 1 ? "pipe" : "pipes"}`;
+}
+
+export function columnFiguresOf(figures: Figures | null): Map<string, ColumnFigures> {
+  const out = new Map<string, ColumnFigures>();
+  if (!figures?.ok) return out;
+  for (const d of figures.estimate.divisions) {
+    const hasChest = d.chest.main.rows > 0;
+    const pipesText: Record<string, string> = {};
+    for (const s of d.stops) pipesText[s.id] = pipesWords({ total: s.pipes.total, prepared: s.pipes.prepared, kind: s.kind });
+    out.set(d.id, {
+      notes: d.notes,
+      pipesTotal: d.pipes.total,
+      fit: fitState(d.chest.fit, hasChest),
+      hasChest,
+      words: chestWords(d.chest.main, d.chest.space, d.chest.fit),
+      pipesText,
+    });
+  }
+  return out;
+}
+
+/** The new figures, each division's object kept from `before` when its content is the same. */
+export function keepUnchanged(before: ReadonlyMap<string, ColumnFigures>, after: Map<string, ColumnFigures>): Map<string, ColumnFigures> {
+  const out = new Map<string, ColumnFigures>();
+  for (const [id, value] of after) {
+    const old = before.get(id);
+    out.set(id, old && JSON.stringify(old) === JSON.stringify(value) ? old : value);
+  }
+  return out;
+}
+
+/** Column figures that keep their identity while their content is the same (React's "information from previous renders"). */
+export function useColumnFigures(figures: Figures | null): Map<string, ColumnFigures> {
+  const [kept, setKept] = useState(() => ({ figures, map: columnFiguresOf(figures) }));
+  if (kept.figures !== figures) {
+    const map = keepUnchanged(kept.map, columnFiguresOf(figures));
+    setKept({ figures, map });
+    return map;
+  }
+  return kept.map;
+}
