@@ -36,6 +36,9 @@ export function contentSecurityPolicy({ nonce, https, dev, storage = [] }: Heade
   return [
     "default-src 'self'",
     `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${dev ? " 'unsafe-eval'" : ""}`,
+    // The editor's estimate worker is one of our own static chunks; without this the worker would
+    // fall under script-src, where 'strict-dynamic' ignores 'self' and refuses it.
+    "worker-src 'self'",
     "style-src 'self' 'unsafe-inline'",
     `img-src 'self' data: blob:${files}`,
     `media-src 'self'${files}`,
