@@ -19,6 +19,8 @@ export const permissions = [
   "projects:create",
   "projects:read",
   "projects:edit",
+  /** Where a project stands (enquiry, tender, contracted…): the estimator manages it without editing the rest. */
+  "projects:status",
   "schemes:edit",
   "schemes:read",
   /** Earlier versions with their authors and notes: the firm's working history, not the committee's. */
@@ -51,11 +53,11 @@ const grants: Record<Role, readonly Permission[]> = {
   // A preference is a committee member's own; the administrator manages, but does not sit on a committee.
   admin: permissions.filter((p) => p !== "preferences:record"),
   designer: [
-    "projects:create", "projects:read", "projects:edit", "schemes:edit", "schemes:read", "revisions:read", "estimate:read", "money:read",
+    "projects:create", "projects:read", "projects:edit", "projects:status", "schemes:edit", "schemes:read", "revisions:read", "estimate:read", "money:read",
     "notes:write", "notes:read", "committee:manage", "comments:write", "preferences:read", "files:read", "files:write", "files:share",
   ],
   estimator: [
-    "projects:read", "schemes:read", "revisions:read", "estimate:read", "money:read", "rates:manage", "quotes:issue",
+    "projects:read", "projects:status", "schemes:read", "revisions:read", "estimate:read", "money:read", "rates:manage", "quotes:issue",
     "notes:write", "notes:read", "committee:manage", "comments:write", "preferences:read", "files:read", "files:write", "files:share",
   ],
   // The workshop makes much of the survey on site: it adds photos, but sharing is for the people who deal with the committee.

@@ -85,6 +85,7 @@ export const api = {
   createProject: (input: ProjectInput) => call<{ project: ProjectRead }>("POST", "/api/projects", input),
   getProject: (id: string) => call<{ project: ProjectRead; schemes: SchemeSummary[] }>("GET", `/api/projects/${id}`),
   updateProject: (id: string, input: Partial<ProjectInput>) => call<{ project: ProjectRead }>("PATCH", `/api/projects/${id}`, input),
+  setProjectStatus: (id: string, status: ProjectInput["status"]) => call<{ project: ProjectRead }>("PUT", `/api/projects/${id}/status`, { status }),
   archiveProject: (id: string, archived: boolean) => call<{ project: ProjectRead }>("POST", `/api/projects/${id}/archive`, { archived }),
   addMember: (id: string, email: string) => call<{ project: ProjectRead }>("POST", `/api/projects/${id}/members`, { email }),
   removeMember: (id: string, userId: string) => call<{ project: ProjectRead }>("DELETE", `/api/projects/${id}/members/${userId}`),

@@ -113,6 +113,12 @@ export async function updateProject({ user, projectId, patch }: { user: SessionU
   return readProject(row!, user);
 }
 
+export async function setProjectStatus({ user, projectId, status }: { user: SessionUser; projectId: string; status: ProjectInput["status"] }) {
+  assertOpen(await loadProjectFor({ user, projectId }), "change its status");
+  const [row] = await db.update(projects).set({ status, updatedAt: new Date() }).where(eq(projects.id, projectId)).returning();
+  return readProject(row!, user);
+}
+
 export async function setProjectArchived({ user, projectId, archived }: { user: SessionUser; projectId: string; archived: boolean }) {
   await loadProjectFor({ user, projectId });
   const [row] = await db

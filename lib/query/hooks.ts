@@ -8,7 +8,7 @@ import { useMutation, useQuery, useQueryClient, type QueryKey } from "@tanstack/
 import { api, type UserRow } from "@/components/spec/api";
 import type { CommentInput } from "@/lib/spec/committee";
 import type { SchemeStatus } from "@/lib/spec/document";
-import type { ProjectInput } from "@/lib/spec/projects";
+import type { ProjectInput, ProjectStatus } from "@/lib/spec/projects";
 import { keys } from "./keys";
 
 /** A mutation that refetches what it makes stale once it succeeds. */
@@ -26,6 +26,7 @@ export const useProject = (projectId: string) => useQuery({ queryKey: keys.proje
 
 export const useCreateProject = () => useWrite((input: ProjectInput) => api.createProject(input), () => [keys.projects.all]);
 export const useUpdateProject = (projectId: string) => useWrite((input: Partial<ProjectInput>) => api.updateProject(projectId, input), () => [keys.projects.all]);
+export const useSetProjectStatus = (projectId: string) => useWrite((status: ProjectStatus) => api.setProjectStatus(projectId, status), () => [keys.projects.all]);
 export const useArchiveProject = (projectId: string) => useWrite((archived: boolean) => api.archiveProject(projectId, archived), () => [keys.projects.all]);
 export const useAddMember = (projectId: string) => useWrite((email: string) => api.addMember(projectId, email), () => [keys.projects.detail(projectId)]);
 export const useRemoveMember = (projectId: string) => useWrite((userId: string) => api.removeMember(projectId, userId), () => [keys.projects.detail(projectId)]);

@@ -42,6 +42,9 @@ export const projectInputSchema = z.object({
 export type ProjectInput = z.input<typeof projectInputSchema>;
 export const projectPatchSchema = projectInputSchema.partial();
 
+/** The status alone, for the roles that manage where a project stands but not its details. */
+export const projectStatusSchema = z.object({ status: z.enum(projectStatuses, { error: "Choose one of the project statuses." }) });
+
 export type ProjectSummary = {
   id: string;
   name: string;

@@ -24,6 +24,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
     role: user.role,
     isClient: user.role === "client",
     editProject: can(user.role, "projects:edit"),
+    setStatus: can(user.role, "projects:status"),
     editSchemes: can(user.role, "schemes:edit"),
     manageCommittee: can(user.role, "committee:manage"),
     readPreferences: can(user.role, "preferences:read"),

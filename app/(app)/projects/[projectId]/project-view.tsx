@@ -8,6 +8,7 @@ import { CommitteePanel } from "./committee-panel";
 import { MembersPanel } from "./members-panel";
 import { MyPreference, PreferenceSummaryPanel } from "./preferences";
 import { ProjectDetailsForm } from "./project-details-form";
+import { ProjectDetailsText } from "./project-details-text";
 import { ProjectLinks } from "./project-links";
 import { SchemesList } from "./schemes-list";
 
@@ -16,6 +17,8 @@ export type ProjectAbilities = {
   role: Role;
   isClient: boolean;
   editProject: boolean;
+  /** Set the project's status without editing its other details (the estimator). */
+  setStatus: boolean;
   editSchemes: boolean;
   manageCommittee: boolean;
   readPreferences: boolean;
@@ -55,7 +58,7 @@ export function ProjectView({ projectId, can }: { projectId: string; can: Projec
           {!can.isClient && (
             <section className="panel p-4">
               <h2 className="mb-3 text-xl font-semibold">Details</h2>
-              <ProjectDetailsForm project={project} readOnly={!can.editProject} />
+              {can.editProject ? <ProjectDetailsForm project={project} readOnly={false} /> : <ProjectDetailsText project={project} mayChangeStatus={can.setStatus && !project.archived} />}
             </section>
           )}
         </div>
