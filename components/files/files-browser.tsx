@@ -237,7 +237,7 @@ export function FilesBrowser({ projectId, targets, mayWrite, mayShare, initialLi
 
       <section className="panel" aria-labelledby="list-heading">
         <h2 id="list-heading" className="border-b border-tin-rule px-4 py-3 text-xl font-semibold">All files</h2>
-        <div className="overflow-x-auto">
+        <div className="relative overflow-x-auto">
           <table className="w-full text-sm" data-testid="files-table">
             <thead className="text-left text-xs uppercase tracking-wide text-tin">
               <tr>

@@ -68,7 +68,7 @@ export function ProjectsTable() {
           Show archived
         </label>
       </div>
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full text-sm" data-testid="projects-table">
           <thead className="text-left text-xs uppercase tracking-wide text-tin">
             <tr>

@@ -62,7 +62,7 @@ export function QuotationsPanel({ projectId, initial, schemes, rateSets, mayIssu
       {data.length === 0 ? (
         <p className="px-4 py-3 text-sm text-tin">{role === "client" ? "No tender has been sent to you yet." : "No quotations yet."}</p>
       ) : (
-        <div className="overflow-x-auto">
+        <div className="relative overflow-x-auto">
           <table className="w-full text-sm" data-testid="quotations-table">
             <thead className="text-left text-xs uppercase tracking-wide text-tin">
               <tr>

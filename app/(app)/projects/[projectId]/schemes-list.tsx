@@ -55,7 +55,10 @@ function NewSchemeForm({ projectId }: { projectId: string }) {
   );
 }
 
-function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: string; scheme: SchemeSummary; mayEdit: boolean; copiedFrom?: string }) {
+/** Columns a phone can do without: the counts, version and date are in the editor too. */
+const wideOnly = "hidden sm:table-cell";
+
+function SchemeRow({ projectId, scheme, mayEdit, clientView, copiedFrom }: { projectId: string; scheme: SchemeSummary; mayEdit: boolean; clientView: boolean; copiedFrom?: string }) {
   const router = useRouter();
   const [copying, setCopying] = useState(false);
   const [copyName, setCopyName] = useState(`${scheme.name} (copy)`);
@@ -71,7 +74,7 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
 
   return (
     <tr className="border-t border-tin-rule align-top" data-testid={`scheme-${scheme.name}`}>
-      <td className="px-4 py-2">
+      <td className="min-w-[13rem] px-4 py-2">
         <Link href={`/projects/${projectId}/schemes/${scheme.id}`} className="font-medium underline decoration-tin-rule underline-offset-2 hover:decoration-brass">
           {scheme.name}
         </Link>
@@ -79,7 +82,7 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
         {copiedFrom && <span className="block text-xs text-tin">Copied from {copiedFrom}</span>}
         {copying && (
           <form
-            className="mt-2 flex gap-2"
+            className="mt-2 flex flex-wrap gap-2"
             aria-label={`Duplicate ${scheme.name}`}
             onSubmit={(e) => {
               e.preventDefault();
@@ -89,20 +92,20 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
             }}
           >
             <label className="sr-only" htmlFor={`copy-${scheme.id}`}>Name of the copy</label>
-            <input id={`copy-${scheme.id}`} className="field py-1" value={copyName} onChange={(e) => setCopyName(e.target.value)} autoFocus />
+            <input id={`copy-${scheme.id}`} className="field min-w-[12rem] flex-1 py-1" value={copyName} onChange={(e) => setCopyName(e.target.value)} autoFocus />
             <button type="submit" className="btn-primary py-1" disabled={pending}>Duplicate</button>
             <button type="button" className="btn py-1" onClick={() => setCopying(false)}>Cancel</button>
           </form>
         )}
         {error && <p role="alert" className="field-error">{error}</p>}
       </td>
-      <td className="px-4 py-2 text-right num">{scheme.divisionCount}</td>
+      <td className={`${wideOnly} px-4 py-2 text-right num`}>{scheme.divisionCount}</td>
       <td className="px-4 py-2 text-right num">{scheme.stopCount}</td>
-      <td className="px-4 py-2 text-right num">v{scheme.version}</td>
+      <td className={`${wideOnly} px-4 py-2 text-right num`}>v{scheme.version}</td>
       <td className="px-4 py-2">
         {mayEdit ? (
           <select
-            className="field min-w-28 py-1"
+            className="field w-auto min-w-[9.5rem] py-1"
             aria-label={`Status of ${scheme.name}`}
             value={scheme.status}
             disabled={pending}
@@ -114,21 +117,23 @@ function SchemeRow({ projectId, scheme, mayEdit, copiedFrom }: { projectId: stri
           schemeStatusLabels[scheme.status]
         )}
       </td>
-      <td className="px-4 py-2">
-        {mayEdit ? (
-          <label className="inline-flex items-center gap-1.5 text-xs">
-            <input
-              type="checkbox"
-              className="accent-brass"
-              checked={scheme.sharedWithClient}
-              disabled={pending}
-              onChange={(e) => change({ sharedWithClient: e.target.checked })}
-            />
-            {scheme.sharedWithClient ? "Shared" : "Not shared"}
-          </label>
-        ) : scheme.sharedWithClient ? "Shared" : "Not shared"}
-      </td>
-      <td className="px-4 py-2 num text-xs">{formatDateTime(scheme.updatedAt)}</td>
+      {!clientView && (
+        <td className="px-4 py-2">
+          {mayEdit ? (
+            <label className="inline-flex items-center gap-1.5 text-xs">
+              <input
+                type="checkbox"
+                className="accent-brass"
+                checked={scheme.sharedWithClient}
+                disabled={pending}
+                onChange={(e) => change({ sharedWithClient: e.target.checked })}
+              />
+              {scheme.sharedWithClient ? "Shared" : "Not shared"}
+            </label>
+          ) : scheme.sharedWithClient ? "Shared" : "Not shared"}
+        </td>
+      )}
+      <td className={`${wideOnly} px-4 py-2 num text-xs`}>{formatDateTime(scheme.updatedAt)}</td>
       <td className="px-4 py-2 text-right whitespace-nowrap">
         <Link className="btn py-1 text-xs" href={`/projects/${projectId}/schemes/${scheme.id}/stop-list`}>Stop list</Link>
         {mayEdit && !copying && (
@@ -151,23 +156,24 @@ export function SchemesList({ projectId, schemes, mayEdit, clientView }: { proje
           <Link className="btn-primary" href={`/projects/${projectId}/compare`} data-testid="compare-link">Compare schemes</Link>
         )}
       </div>
-      <div className="overflow-x-auto">
+      {/* relative: the header's screen-reader-only words are placed inside the scrolling box, not beside the page */}
+      <div className="relative overflow-x-auto">
         <table className="w-full text-sm" data-testid="schemes-table">
           <thead className="text-left text-xs uppercase tracking-wide text-tin">
             <tr>
               <th className="px-4 py-2">Scheme</th>
-              <th className="px-4 py-2 text-right">Divisions</th>
+              <th className={`${wideOnly} px-4 py-2 text-right`}>Divisions</th>
               <th className="px-4 py-2 text-right">Stops</th>
-              <th className="px-4 py-2 text-right">Version</th>
+              <th className={`${wideOnly} px-4 py-2 text-right`}>Version</th>
               <th className="px-4 py-2">Status</th>
-              <th className="px-4 py-2">Committee</th>
-              <th className="px-4 py-2">Updated</th>
+              {!clientView && <th className="px-4 py-2">Committee</th>}
+              <th className={`${wideOnly} px-4 py-2`}>Updated</th>
               <th className="px-4 py-2"><span className="sr-only">Actions</span></th>
             </tr>
           </thead>
           <tbody>
             {schemes.map((s) => (
-              <SchemeRow key={s.id} projectId={projectId} scheme={s} mayEdit={mayEdit} copiedFrom={s.copiedFromId ? names.get(s.copiedFromId) : undefined} />
+              <SchemeRow key={s.id} projectId={projectId} scheme={s} mayEdit={mayEdit} clientView={clientView} copiedFrom={s.copiedFromId ? names.get(s.copiedFromId) : undefined} />
             ))}
           </tbody>
         </table>
