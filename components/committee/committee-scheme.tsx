@@ -64,6 +64,13 @@ export function CommitteeScheme({ scheme, projectName, clientName, figures }: { 
               </li>
             ))}
           </ul>
+          {figures.chests.some((c) => c.fits === false) && (
+            <p className="mt-2 max-w-3xl text-xs text-ink-soft" data-testid="fit-explained">
+              &ldquo;Does not fit&rdquo; means the pipes of that division, as the scheme stands, need more room than the
+              space measured in the case. It is a question for the design, not a fault in the organ: the builder can
+              enlarge the chest, move some pipes elsewhere or change the scheme, and will say which before a tender.
+            </p>
+          )}
         </section>
       )}
       <article className="bg-paper-card px-6 py-6 shadow-sm print:bg-white print:p-0 print:shadow-none">

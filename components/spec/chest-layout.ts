@@ -5,8 +5,9 @@
  * equal on the example schemes.
  */
 import {
-  chestSize, pipesOfStop, placeRow, planScheme, rowDepthMm, rowOf, type ChestSize, type GeometryRules, type PipeDetail, type RowPipe, type Scheme,
+  chestSize, formatFootage, parseFootage, pipesOfStop, placeRow, planScheme, rowDepthMm, rowOf, type ChestSize, type GeometryRules, type PipeDetail, type RowPipe, type Scheme,
 } from "@/lib/estimate";
+import { romanNumeral } from "./format";
 
 export type PlacedPipe = {
   x: number;
@@ -76,8 +77,12 @@ export function layChest(scheme: Scheme, divisionId: string, rates: GeometryRule
   const labelOf = (rowIndex: number) => {
     const r = plan.rows[rowIndex];
     const sp = plan.stops[r.stop];
-    const ranks = sp.ranks > 1 ? ` rank ${r.rank + 1}` : "";
-    return `${sp.stop.name} ${sp.footageText}′${ranks}`;
+    if (sp.ranks <= 1) return `${sp.stop.name} ${sp.footageText}′`;
+    // A mixture's ranks each have their own pitch at the bottom (its first break), not the stop's nominal one.
+    const bottom = sp.stop.breaks?.[0]?.footages[r.rank];
+    const f = bottom === undefined || bottom === null ? null : parseFootage(bottom);
+    if (sp.stop.family === "mixture") return `${sp.stop.name} ${romanNumeral(sp.ranks)}, rank ${r.rank + 1}${f ? ` (${formatFootage(f)}′ at the bottom)` : ""}`;
+    return `${sp.stop.name} ${sp.footageText}′ rank ${r.rank + 1}`;
   };
 
   const rowIds = [...byRow.keys()].sort((a, b) => a - b);

@@ -25,10 +25,20 @@ export function romanNumeral(n: number): string {
   return out;
 }
 
-/** "2 2/3" → "2⅔′"; text that is not a footage is shown as typed, so a mistake stays visible. */
+const SUPERSCRIPT = "⁰¹²³⁴⁵⁶⁷⁸⁹";
+const SUBSCRIPT = "₀₁₂₃₄₅₆₇₈₉";
+const digitsIn = (n: string, set: string) => n.replace(/\d/g, (d) => set[Number(d)]!);
+
+/**
+ * "2 2/3" → "2⅔′"; a fraction with no single glyph (4 4/7) is built the same way, from superscript
+ * and subscript digits around the fraction slash (U+2044): "4⁴⁄₇′". Text that is not a footage is
+ * shown as typed, so a mistake stays visible.
+ */
 export function footageText(footage: string | number): string {
   const f = parseFootage(footage);
-  return f ? `${formatFootage(f)}′` : `${String(footage).trim()}?`;
+  if (!f) return `${String(footage).trim()}?`;
+  const text = formatFootage(f).replace(/ ?(\d+)\/(\d+)$/, (_, num: string, den: string) => `${digitsIn(num, SUPERSCRIPT)}\u2044${digitsIn(den, SUBSCRIPT)}`);
+  return `${text}′`;
 }
 
 export function isValidFootage(footage: string | number): boolean {

@@ -6,7 +6,8 @@ import { Treatment } from "./treatment-mark";
 export function StopList({ doc }: { doc: SchemeDocument }) {
   const numberOf = new Map<string, number>();
   let n = 0;
-  for (const d of doc.divisions) for (const s of d.stops) numberOf.set(s.id, ++n);
+  // Removed stops are listed (struck through) but not numbered: the numbers are the stops the organ will have.
+  for (const d of doc.divisions) for (const s of d.stops) if (s.origin !== "removed") numberOf.set(s.id, ++n);
   const divisionOfStop = new Map<string, string>();
   for (const d of doc.divisions) for (const s of d.stops) divisionOfStop.set(s.id, d.name);
   const acc = doc.accessories;
@@ -40,7 +41,7 @@ export function StopList({ doc }: { doc: SchemeDocument }) {
                     if (s.duplex) note.push("duplexed");
                     return (
                       <tr key={s.id} className="align-baseline" data-testid={`list-stop-${s.name}`}>
-                        <td className="num w-8 pr-2 text-right text-ink-soft">{numberOf.get(s.id)}.</td>
+                        <td className="num w-8 pr-2 text-right text-ink-soft">{numberOf.has(s.id) ? `${numberOf.get(s.id)}.` : ""}</td>
                         <td className={`pr-2 ${s.origin === "removed" ? "line-through" : ""}`}>
                           {s.name}
                           {note.length > 0 && <span className="text-sm italic text-ink-soft"> ({note.join("; ")})</span>}
