@@ -42,6 +42,27 @@ describe("/api/projects", () => {
     expect(all.json.projects.some((p: { id: string }) => p.id === id)).toBe(true);
   });
 
+  it("lets the estimator set a project's status, and only its status", async () => {
+    const designerCookie = await signIn(await makeUser("designer"));
+    const id = (await api("/api/projects", { method: "POST", cookie: designerCookie, body: { ...project, name: `Status ${Date.now()}` } })).json.project.id;
+    const estimator = await signIn(await makeUser("estimator"));
+    const set = await api(`/api/projects/${id}/status`, { method: "PUT", cookie: estimator, body: { status: "tender" } });
+    expect(set.status).toBe(200);
+    expect(set.json.project.status).toBe("tender");
+    // The other details stay the tonal director's.
+    expect((await api(`/api/projects/${id}`, { method: "PATCH", cookie: estimator, body: { name: "Renamed" } })).status).toBe(403);
+    const bad = await api(`/api/projects/${id}/status`, { method: "PUT", cookie: estimator, body: { status: "sold" } });
+    expect(bad.status).toBe(422);
+    expect(bad.json.error.fields.status[0]).toBe("Choose one of the project statuses.");
+    for (const role of ["workshop", "client"] as const) {
+      const res = await api(`/api/projects/${id}/status`, { method: "PUT", cookie: await signIn(await makeUser(role)), body: { status: "complete" } });
+      expect(res.status, role).toBe(403);
+    }
+    const { rows } = await testDb().query("select status, name from projects where id = $1", [id]);
+    expect(rows[0]).toMatchObject({ status: "tender" });
+    expect(rows[0].name).toMatch(/^Status /);
+  });
+
   it("refuses bad fields with 422 naming each one, and saves nothing", async () => {
     const cookie = await signIn(await makeUser("designer"));
     const res = await api("/api/projects", { method: "POST", cookie, body: { name: "", clientName: "", pitchHz: 600, targetDate: "next spring" } });

@@ -1,0 +1,118 @@
+// The product as each role meets it: the division form keeps a wrong compass in the form and asks
+// about an unusual wind, destructive actions ask first, the workshop opens a stop to read it, the
+// estimator sets a project's status from details shown as text, and no page scrolls sideways at
+// phone width (390 × 844, a common phone's viewport in CSS pixels).
+import { expect, test, type Page } from "@playwright/test";
+import { restoreScheme } from "@/db/demo-scenario";
+import { api, makeUser } from "../support/server";
+import { openAs, projectWithScheme, schemePath, uid } from "./editor-helpers";
+
+test("the division form says a reversed compass in place and asks before keeping 5000 mm of wind", async ({ page }) => {
+  test.setTimeout(60_000);
+  const designer = await makeUser("designer");
+  const { projectId, schemeId } = await projectWithScheme(designer, restoreScheme);
+  await openAs(page, designer, schemePath(projectId, schemeId));
+  await page.getByRole("button", { name: "Edit division Great" }).click();
+  const dialog = page.getByRole("dialog", { name: /Great/ });
+  await dialog.getByLabel("Compass from").fill("c''''");
+  await dialog.getByLabel("to", { exact: true }).fill("C");
+  await dialog.getByRole("button", { name: "Apply" }).click();
+  // The form stays open with the one real problem, and no follow-on message about the stops.
+  await expect(dialog).toBeVisible();
+  await expect(dialog).toContainText("Compass runs downward (c'''' to C); give the lowest note first");
+  await expect(dialog).not.toContainText(/offset bass/i);
+  await expect(dialog).not.toContainText(/Too small|expected/);
+
+  await dialog.getByLabel("Compass from").fill("C");
+  await dialog.getByLabel("to", { exact: true }).fill("c''''");
+  await dialog.getByLabel("Wind pressure").fill("5000");
+  await expect(dialog.getByTestId("field-warning")).toContainText("far above the usual");
+  await dialog.getByRole("button", { name: "Apply" }).click();
+  await expect(dialog.getByTestId("division-warnings")).toContainText("Some values are unusual");
+  await dialog.getByRole("button", { name: "Keep these values and apply" }).click();
+  await expect(dialog).toBeHidden();
+  await expect(page.getByTestId("save-state")).toHaveAttribute("data-state", "saved", { timeout: 15_000 });
+});
+
+test("archiving a project and removing a member ask first; cancelling changes nothing", async ({ page }) => {
+  const designer = await makeUser("designer");
+  const workshop = await makeUser("workshop");
+  const { cookie, projectId } = await projectWithScheme(designer, restoreScheme);
+  expect((await api(`/api/projects/${projectId}/members`, { method: "POST", cookie, body: { email: workshop.email } })).status).toBe(200);
+  await openAs(page, designer, `/projects/${projectId}`);
+
+  await page.getByRole("button", { name: "Archive project" }).click();
+  const ask = page.getByTestId("confirm-dialog");
+  await expect(ask).toBeVisible();
+  await ask.getByRole("button", { name: "Cancel" }).click();
+  await expect(ask).toBeHidden();
+  expect((await api(`/api/projects/${projectId}`, { cookie })).json.project.archived).toBe(false);
+
+  await page.getByRole("button", { name: new RegExp(`^Remove .* from the project$`) }).click();
+  await expect(ask).toContainText("no longer sees this project");
+  await ask.getByRole("button", { name: "Remove from the project" }).click();
+  await expect(page.getByText("was removed from the project.")).toBeVisible();
+  const members = (await api(`/api/projects/${projectId}`, { cookie })).json.project.members as { email: string }[];
+  expect(members.map((m) => m.email)).not.toContain(workshop.email);
+
+  await page.getByRole("button", { name: "Archive project" }).click();
+  await ask.getByRole("button", { name: /^Archive/ }).click();
+  await expect.poll(async () => (await api(`/api/projects/${projectId}`, { cookie })).json.project.archived).toBe(true);
+});
+
+test("the workshop opens a stop and reads its details; the estimator sets the status from a details text", async ({ page, browser }) => {
+  const designer = await makeUser("designer");
+  const { projectId, schemeId } = await projectWithScheme(designer, restoreScheme);
+  await openAs(page, await makeUser("workshop"), schemePath(projectId, schemeId));
+  await page.getByRole("button", { name: "Details of Clarabella 8′" }).first().click();
+  const details = page.getByTestId("stop-details");
+  await expect(details).toBeVisible();
+  await expect(details).toContainText("Clarabella");
+  await expect(details).toContainText(/pine/i);
+  await expect(page.getByRole("dialog").getByRole("textbox")).toHaveCount(0);
+
+  const ctx = await browser.newContext();
+  const ep = await ctx.newPage();
+  await openAs(ep, await makeUser("estimator"), `/projects/${projectId}`);
+  await expect(ep.getByTestId("project-details-text")).toContainText("Invented parish of St Test");
+  await expect(ep.getByRole("form", { name: "Project details" })).toHaveCount(0);
+  await ep.getByLabel("Status", { exact: true }).selectOption("tender");
+  await ep.getByRole("button", { name: "Set status" }).click();
+  await expect(ep.getByText("Status set to Tender.")).toBeVisible();
+  await expect(ep.getByTestId("project-status")).toHaveText("Tender");
+  await ctx.close();
+});
+
+async function sideways(page: Page): Promise<number> {
+  return page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+}
+
+test("at 390 px no page scrolls sideways, for each role", async ({ browser }) => {
+  test.setTimeout(180_000);
+  const designer = await makeUser("designer");
+  const { cookie, projectId, schemeId } = await projectWithScheme(designer, restoreScheme, `Phone width ${uid()}`);
+  expect((await api(`/api/schemes/${schemeId}`, { method: "PATCH", cookie, body: { sharedWithClient: true } })).status).toBe(200);
+  const client = await makeUser("client");
+  expect((await api(`/api/projects/${projectId}/members`, { method: "POST", cookie, body: { email: client.email } })).status).toBe(200);
+  const scheme = schemePath(projectId, schemeId);
+  const pages: [Parameters<typeof makeUser>[0] | "the designer", string[]][] = [
+    ["the designer", ["/", "/projects", `/projects/${projectId}`, scheme, `${scheme}/stop-list`, `${scheme}/chests`, `/projects/${projectId}/compare`]],
+    ["admin", ["/admin/users", "/admin/firm", "/admin/mail"]],
+    ["estimator", ["/", `/projects/${projectId}`, scheme, "/rates"]],
+    ["workshop", ["/", `/projects/${projectId}`, scheme]],
+    ["client", [`/projects/${projectId}`, scheme]],
+  ];
+  for (const [role, paths] of pages) {
+    const user = role === "the designer" ? designer : role === "client" ? client : await makeUser(role);
+    const ctx = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const page = await ctx.newPage();
+    await openAs(page, user, paths[0]!);
+    for (const path of paths) {
+      if (path !== paths[0]) await page.goto(path);
+      await expect(page.getByTestId("user-name")).toBeAttached();
+      await expect(page.getByRole("button", { name: "Sign out" }), `${role} ${path}: Sign out within reach`).toBeInViewport();
+      expect(await sideways(page), `${role} ${path} scrolls sideways`).toBeLessThanOrEqual(0);
+    }
+    await ctx.close();
+  }
+});
