@@ -1,7 +1,10 @@
 // The editor's speed with the large example scheme (about 150 stops) loaded:
 // - the scheme API answers a read in under 50 ms (median of 30);
-// - a keyboard drag-and-drop move of a stop to another division updates the figures panel
-//   within 100 ms (median of 20), timed in the page from the drop key to the panel's next paint.
+// - in Chromium, as a user meets it: the editor's load to interactive (navigation start to hydrated
+//   and first figures painted; target <= 1 s), and 20 real mouse drags of a stop to the next
+//   division: the longest task on the main thread while dragging (target <= 50 ms, the RAIL model's
+//   long-task threshold) and the drop to painted figures less the estimator's own time in its worker
+//   (median; target <= 16 ms, one frame at 60 Hz);
 // - the comparison route answers for the two parish schemes, and for the large scheme against a copy
 //   with ten changes, in under 150 ms (median of 30), printed beside the scheme read of the same run;
 //   the cost of each change (one estimate per change, asked for after the comparison) is printed too.
@@ -31,31 +34,77 @@ async function signInCookies(email: string, password: string) {
   return jar;
 }
 
-async function timeDrop(page: Page, stopId: string, key: "ArrowRight" | "ArrowLeft"): Promise<number> {
+type DragTiming = { longestTaskMs: number; dropToPaintMs: number; estimateMs: number };
+
+/**
+ * One real mouse drag: press on the stop's handle, 20 pointer moves to a point over the next
+ * division's column, release. Long tasks are collected while the pointer moves; after the release,
+ * the time to the frame that paints the figures for the new document (the panel no longer stale),
+ * and the estimator's own time for it as the worker reported.
+ */
+async function timeMouseDrag(page: Page, stopId: string, target: string): Promise<DragTiming> {
   const handle = page.locator(`[data-stop-id="${stopId}"] button[aria-label^="Move "]`);
-  await handle.focus();
-  await page.keyboard.press("Space");
-  await page.waitForTimeout(150);
-  await page.keyboard.press(key);
-  await page.waitForTimeout(150);
-  // Armed only now, so the pick-up key is not taken for the drop. The drop key's capture listener
-  // runs before dnd-kit's; the panel's first change after it, plus the frame that paints it, ends the timing.
+  await handle.scrollIntoViewIfNeeded();
+  const from = (await handle.boundingBox())!;
+  const to = (await page.locator(`[data-testid="division-${target}"]`).boundingBox())!;
   await page.evaluate(() => {
-    const w = window as unknown as { __drop?: number; __painted?: number };
+    const w = window as unknown as { __tasks: number[]; __obs?: PerformanceObserver; __drop?: number; __painted?: number; __ms?: number };
+    w.__tasks = [];
     w.__drop = undefined;
     w.__painted = undefined;
-    const figures = document.querySelector('[data-testid="figures"]')!;
-    document.addEventListener("keydown", (e) => { if (e.key === " ") w.__drop = performance.now(); }, { capture: true, once: true });
-    const obs = new MutationObserver(() => {
-      if (w.__drop === undefined) return;
-      obs.disconnect();
-      requestAnimationFrame(() => { w.__painted = performance.now(); });
-    });
-    obs.observe(figures, { subtree: true, childList: true, characterData: true });
+    w.__obs = new PerformanceObserver((list) => { for (const e of list.getEntries()) w.__tasks.push(e.duration); });
+    w.__obs.observe({ type: "longtask" });
   });
-  await page.keyboard.press("Space");
-  await page.waitForFunction(() => (window as unknown as { __painted?: number }).__painted !== undefined, null, { timeout: 5000 });
-  return page.evaluate(() => { const w = window as unknown as { __drop: number; __painted: number }; return w.__painted - w.__drop; });
+  const x0 = from.x + from.width / 2;
+  const y0 = from.y + from.height / 2;
+  await page.mouse.move(x0, y0);
+  await page.mouse.down();
+  const x1 = to.x + to.width / 2;
+  const y1 = to.y + Math.min(to.height / 2, 240);
+  for (let i = 1; i <= 20; i++) await page.mouse.move(x0 + ((x1 - x0) * i) / 20, y0 + ((y1 - y0) * i) / 20);
+  // Armed just before the release: the pointerup's capture listener runs before dnd-kit's.
+  await page.evaluate(() => {
+    const w = window as unknown as { __obs?: PerformanceObserver; __drop?: number; __painted?: number; __ms?: number };
+    const figures = () => document.querySelector('[data-testid="figures"]')!;
+    document.addEventListener("pointerup", () => {
+      w.__drop = performance.now();
+      w.__obs?.disconnect();
+      const check = () => {
+        const f = figures();
+        if (f.getAttribute("data-state") === "ok" && !f.hasAttribute("data-stale") && w.__painted === undefined) {
+          obs.disconnect();
+          w.__ms = Number(f.getAttribute("data-estimate-ms"));
+          requestAnimationFrame(() => { w.__painted = performance.now(); });
+        }
+      };
+      const obs = new MutationObserver(check);
+      obs.observe(figures(), { subtree: true, childList: true, characterData: true, attributes: true });
+    }, { capture: true, once: true });
+  });
+  await page.mouse.up();
+  await page.waitForFunction(() => (window as unknown as { __painted?: number }).__painted !== undefined, null, { timeout: 10_000 });
+  return page.evaluate(() => {
+    const w = window as unknown as { __tasks: number[]; __drop: number; __painted: number; __ms: number };
+    return { longestTaskMs: Math.max(0, ...w.__tasks), dropToPaintMs: w.__painted - w.__drop, estimateMs: w.__ms };
+  });
+}
+
+/** Navigation start to the editor hydrated with its first figures painted, in the page's own clock. */
+async function timeLoad(page: Page, url: string): Promise<number> {
+  await page.goto(url);
+  return page.evaluate(
+    () =>
+      new Promise<number>((resolve) => {
+        const ready = () => {
+          const f = document.querySelector('[data-testid="figures"]');
+          const button = [...document.querySelectorAll("button")].find((b) => b.textContent?.trim() === "Sign out");
+          const hydrated = !!button && Object.keys(button).some((k) => k.startsWith("__reactProps"));
+          if (hydrated && f?.getAttribute("data-state") === "ok" && !f.hasAttribute("data-stale")) requestAnimationFrame(() => resolve(performance.now()));
+          else setTimeout(ready, 5);
+        };
+        ready();
+      }),
+  );
 }
 
 async function main() {
@@ -132,18 +181,28 @@ async function main() {
     const context = await browser.newContext({ viewport: { width: 1600, height: 1000 } });
     await context.addCookies([...jar].map(([name, value]) => ({ name, value, url: base })));
     const page = await context.newPage();
-    await page.goto(`${base}/projects/${project.id}/schemes/${scheme.id}`);
-    await page.waitForSelector('[data-testid="figures"][data-state="ok"]');
-    // The first stop of the first division, moved to the next division and back, 20 times.
+    const editorUrl = `${base}/projects/${project.id}/schemes/${scheme.id}`;
+    await timeLoad(page, editorUrl); // warm: the server's caches and the browser's compiled scripts
+    const loads: number[] = [];
+    for (let i = 0; i < 5; i++) loads.push(await timeLoad(page, editorUrl));
+    console.log(`editor load to interactive, ${scheme.stopCount} stops: median ${median(loads).toFixed(0)} ms over ${loads.length} loads (target <= 1000 ms)`);
+
+    // The first stop of the first division, dragged with the mouse to the next division and back.
     const first = page.locator("[data-stop-id]").first();
     const stopId = (await first.getAttribute("data-stop-id"))!;
     const label = (await first.locator('button[aria-label^="Move "]').getAttribute("aria-label"))!;
-    const times: number[] = [];
+    const names = await page.locator("section[data-division-id]").evaluateAll((els) => els.map((e) => e.getAttribute("data-testid")!.slice("division-".length)));
+    const runs: DragTiming[] = [];
     for (let i = 0; i < 22; i++) {
-      const t = await timeDrop(page, stopId, i % 2 === 0 ? "ArrowRight" : "ArrowLeft");
-      if (i >= 2) times.push(t);
+      const t = await timeMouseDrag(page, stopId, names[i % 2 === 0 ? 1 : 0]!);
+      if (i >= 2) runs.push(t);
     }
-    console.log(`drag-and-drop move to figures painted (${label}): median ${median(times).toFixed(1)} ms over ${times.length} moves, max ${Math.max(...times).toFixed(1)} ms (target < 100 ms)`);
+    const over = runs.map((r) => r.dropToPaintMs - r.estimateMs);
+    const longest = Math.max(...runs.map((r) => r.longestTaskMs));
+    console.log(`mouse drag of ${label}, 20 moves each, ${runs.length} drags: longest task while dragging ${longest.toFixed(0)} ms (target <= 50 ms)`);
+    console.log(`drop to figures painted: median ${median(runs.map((r) => r.dropToPaintMs)).toFixed(1)} ms, of which the estimator in its worker ${median(runs.map((r) => r.estimateMs)).toFixed(1)} ms; over the estimator: median ${median(over).toFixed(1)} ms (target <= 16 ms)`);
+    const missed = [longest > 50 && "long task while dragging", median(over) > 16 && "drop to figures", median(loads) > 1000 && "editor load"].filter(Boolean);
+    if (missed.length) console.log(`editor targets missed: ${missed.join(", ")}`);
   } finally {
     await browser.close();
   }
