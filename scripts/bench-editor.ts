@@ -179,6 +179,8 @@ async function main() {
   });
   try {
     const context = await browser.newContext({ viewport: { width: 1600, height: 1000 } });
+    // tsx keeps function names with a __name() helper, which the functions sent to the page call.
+    await context.addInitScript("window.__name = (f) => f;");
     await context.addCookies([...jar].map(([name, value]) => ({ name, value, url: base })));
     const page = await context.newPage();
     const editorUrl = `${base}/projects/${project.id}/schemes/${scheme.id}`;
