@@ -37,8 +37,12 @@ const digitsIn = (n: string, set: string) => n.replace(/\d/g, (d) => set[Number(
 export function footageText(footage: string | number): string {
   const f = parseFootage(footage);
   if (!f) return `${String(footage).trim()}?`;
-  const text = formatFootage(f).replace(/ ?(\d+)\/(\d+)$/, (_, num: string, den: string) => `${digitsIn(num, SUPERSCRIPT)}\u2044${digitsIn(den, SUBSCRIPT)}`);
-  return `${text}′`;
+  const text = formatFootage(f); // "8", "2⅔", or "4 4/7" where no glyph exists
+  const slash = text.indexOf("/");
+  if (slash < 0) return `${text}′`;
+  const space = text.lastIndexOf(" ", slash);
+  const whole = space >= 0 ? text.slice(0, space) : "";
+  return `${whole}${digitsIn(text.slice(space + 1, slash), SUPERSCRIPT)}\u2044${digitsIn(text.slice(slash + 1), SUBSCRIPT)}′`;
 }
 
 export function isValidFootage(footage: string | number): boolean {
