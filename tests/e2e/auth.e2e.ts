@@ -81,11 +81,23 @@ test("an admin adds a user, sees a duplicate refused in place, and disables the 
   await form.getByLabel("E-mail").fill(email);
   await form.getByLabel("First password").fill("a-long-password");
   await form.getByRole("button", { name: "Add user" }).click();
-  await expect(form.getByText(`A user with the e-mail ${email} already exists.`).first()).toBeVisible();
+  // Said once, beside the e-mail field, and gone once the address is changed.
+  const duplicate = form.getByText(`A user with the e-mail ${email} already exists.`);
+  await expect(duplicate).toHaveCount(1);
+  await form.getByLabel("E-mail").fill(`other-${email}`);
+  await expect(duplicate).toHaveCount(0);
+  await expect(form.getByRole("status")).toHaveCount(0);
 
+  // Disabling and a change of role ask first, and say when they are done.
+  const ask = page.getByTestId("confirm-dialog");
   await row.getByRole("button", { name: "Disable" }).click();
+  await expect(ask).toContainText("signed out at once");
+  await ask.getByRole("button", { name: "Disable the account" }).click();
   await expect(row).toContainText("Disabled");
+  await expect(page.getByTestId("users-status")).toContainText("Added Person is disabled and signed out.");
   await row.getByLabel(/Role of/).selectOption("estimator");
+  await ask.getByRole("button", { name: "Make Estimator" }).click();
+  await expect(page.getByTestId("users-status")).toContainText("Added Person is now an Estimator.");
   await page.reload();
   await expect(page.getByTestId(`user-${email}`).getByLabel(/Role of/)).toHaveValue("estimator");
 });
