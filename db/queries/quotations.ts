@@ -239,24 +239,27 @@ export async function decideQuotation({ user, quotationId, outcome }: { user: Se
 }
 
 /**
- * Marks an issued quotation as sent to the committee, once: from then on its members find the tender
- * and its price. Returns the row as it now stands; the caller mails the tender after this has stood.
+ * Marks an issued quotation as sent to the committee (the first sending's time is kept): from then on
+ * its members find the tender and its price. Refused, with nothing recorded, for a quotation that is
+ * not open to sending or a project without committee. Returns the quotation as it now stands and the
+ * recipients, whom the caller mails after this has stood.
  */
-export async function markQuotationSent({ user, quotationId, check }: { user: SessionUser; quotationId: string; check: (projectId: string) => Promise<void> }): Promise<{ read: QuotationRead; project: Project; firstTime: boolean }> {
+export async function markQuotationSent<R>({ user, quotationId, recipientsOf }: { user: SessionUser; quotationId: string; recipientsOf: (projectId: string) => Promise<R[]> }): Promise<{ read: QuotationRead; project: Project; recipients: R[] }> {
   const { row, project } = await loadQuotationRow({ user, quotationId });
   assertOpen(project);
   const status = effectiveStatus(row.status, row.validUntil, todayIso());
   if (status === "draft") throw new AppError("conflict", `Quotation ${row.number} is a draft; issue it before sending the tender.`);
   if (status === "lapsed") throw new AppError("conflict", `Quotation ${row.number} lapsed on ${row.validUntil}; make a new quotation before sending a tender.`);
   if (status !== "issued") throw new AppError("conflict", `Quotation ${row.number} was ${status}; the committee has already answered it.`);
-  await check(project.id);
+  const recipients = await recipientsOf(project.id);
+  if (!recipients.length) throw new AppError("conflict", "The project has no committee member to send the tender to; invite the committee from the project page first.");
   const [updated] = await db
     .update(quotations)
     .set({ sentAt: row.sentAt ?? new Date(), updatedAt: new Date() })
     .where(and(eq(quotations.id, quotationId), eq(quotations.status, "issued")))
     .returning();
   if (!updated) throw new AppError("conflict", `Quotation ${row.number} changed meanwhile; reload it.`);
-  return { read: await toRead(updated, project, user), project, firstTime: row.sentAt === null };
+  return { read: await toRead(updated, project, user), project, recipients };
 }
 
 /** The latest tender sent to the committee for a scheme (its number, price and validity), or null. */

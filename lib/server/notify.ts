@@ -104,8 +104,7 @@ export async function sendCommentNotice({ project, schemeId, schemeName, author,
  * The tender of an issued quotation, as a Word document, to each committee member: one message each,
  * so no one learns the others' addresses. Returns how many messages were queued.
  */
-export async function sendTender({ project, quotation, document, sentBy }: { project: Project; quotation: Quotation; document: MailAttachment; sentBy: string }): Promise<number> {
-  const recipients = await projectRecipients({ projectId: project.id, side: "committee" });
+export async function sendTender({ project, recipients, quotation, document, sentBy }: { project: Project; recipients: readonly { email: string }[]; quotation: Quotation; document: MailAttachment; sentBy: string }): Promise<number> {
   const firm = quotation.firm.name || (await firmName());
   const total = `${currencySymbol(quotation.commercial.currency)}${formatAmount(quotation.totals.totalAmount)}`;
   const body = composeMail({

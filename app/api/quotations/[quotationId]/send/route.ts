@@ -1,6 +1,5 @@
 import { markQuotationSent } from "@/db/queries/quotations";
 import { DOCX_TYPE, documentFileName, writeDocument } from "@/lib/documents";
-import { AppError } from "@/lib/server/errors";
 import { route } from "@/lib/server/guard";
 import { projectRecipients, sendTender } from "@/lib/server/notify";
 import { quotationParams } from "@/lib/server/params";
@@ -11,13 +10,13 @@ import { quotationParams } from "@/lib/server/params";
  * (a member joined later, a message went astray) mails the same frozen tender.
  */
 export const POST = route({ permission: "quotes:issue", params: quotationParams }, async ({ user, params }) => {
-  const { read, project } = await markQuotationSent({ user, quotationId: params.quotationId, check: async (projectId) => {
-    if (!(await projectRecipients({ projectId, side: "committee" })).length) {
-      throw new AppError("conflict", "The project has no committee member to send the tender to; invite the committee from the project page first.");
-    }
-  } });
+  const { read, project, recipients } = await markQuotationSent({
+    user,
+    quotationId: params.quotationId,
+    recipientsOf: (projectId) => projectRecipients({ projectId, side: "committee" }),
+  });
   const q = read.quotation;
   const bytes = await writeDocument("tender", q);
-  const sent = await sendTender({ project, quotation: q, document: { filename: documentFileName("tender", q), contentType: DOCX_TYPE, content: bytes }, sentBy: user.name });
+  const sent = await sendTender({ project, recipients, quotation: q, document: { filename: documentFileName("tender", q), contentType: DOCX_TYPE, content: bytes }, sentBy: user.name });
   return { quotation: read, sentTo: sent };
 });
