@@ -178,7 +178,7 @@ function main(): number {
 }
 
 async function desk(estimatorMs: number): Promise<void> {
-  const file = JSON.parse(readFileSync(join(__dirname, "..", "examples", "large-five-manual.json"), "utf8"));
+  const file = JSON.parse(readFileSync(join(EXAMPLES, "large-five-manual.json"), "utf8"));
   // Issuing: the estimate and totals are computed afresh and the snapshot serialised, as the server stores it.
   const issueMs = time(() => JSON.stringify(exampleQuotation(file)).length, 5, 30);
   const q = exampleQuotation(file);

@@ -198,9 +198,16 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
     const foot0 = wood ? d * SQ_SIDE + 2 * (t > tMin ? t : tMin) : d;
     let footAtMain = 0;
     let diaAtMain = 0;
+    // Pipes per size class are counted as runs: the class changes at most four times along a
+    // segment, so the counts are written when it changes, not once per pipe.
+    let clsFrom = 0;
+    let pclsFrom = 0;
+    const clearance = chestNorms.clearanceMinMm;
+    const clearancePerD = chestNorms.clearanceFractionOfDiameter;
     for (let i = 0; i < n; i++) {
       let len = nominal - k * d;
-      if (len < nominal * MIN_LF) len = nominal * MIN_LF;
+      const shortest = nominal * MIN_LF;
+      if (len < shortest) len = shortest;
       const th = t > tMin ? t : tMin;
       let footprint: number;
       if (wood) {
@@ -211,7 +218,9 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
         footprint = d;
         vol += (PI * d * (len * areaF + 0.5 * foot[cls]) + top * d * d) * th;
       }
-      const wdt = rowWidth(footprint, d, chestNorms);
+      // The chest rule's width of one pipe along its row (chest.ts pipeRowWidthMm), written out here:
+      // a call per pipe costs more than the rule; the tests hold the two equal.
+      const wdt = footprint + clearance + clearancePerD * d;
       if (i < offN) offSide += wdt;
       else {
         if (i === offN) {
@@ -221,10 +230,6 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
         if (odd === 0) cSide += wdt;
         else csSide += wdt;
       }
-      if (made) {
-        bodyCounts[bodyBase + cls]++;
-        pitchCounts[pitchBase + pcls]++;
-      }
       wind += q;
       odd ^= 1;
       nominal *= INV_SEMITONE;
@@ -233,8 +238,22 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
       q *= qRatio;
       body *= INV_SEMITONE;
       pitch *= INV_SEMITONE;
-      while (cls < 4 && body <= BOUNDS[cls]) cls++;
-      while (pcls < 4 && pitch <= BOUNDS[pcls]) pcls++;
+      if (cls < 4 && body <= BOUNDS[cls]) {
+        if (made) bodyCounts[bodyBase + cls] += i + 1 - clsFrom;
+        clsFrom = i + 1;
+        do cls++;
+        while (cls < 4 && body <= BOUNDS[cls]);
+      }
+      if (pcls < 4 && pitch <= BOUNDS[pcls]) {
+        if (made) pitchCounts[pitchBase + pcls] += i + 1 - pclsFrom;
+        pclsFrom = i + 1;
+        do pcls++;
+        while (pcls < 4 && pitch <= BOUNDS[pcls]);
+      }
+    }
+    if (made) {
+      bodyCounts[bodyBase + cls] += n - clsFrom;
+      pitchCounts[pitchBase + pcls] += n - pclsFrom;
     }
     // Pipes get smaller up a run, so its first pipe (on each chest) is its largest and longest.
     rowC[row] += cSide;
