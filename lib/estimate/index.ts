@@ -7,7 +7,7 @@ export { describeIssue, parseScheme, parseSchemeFile, type ParseResult, type Par
 export {
   estimateScheme, SchemeError, type Estimate, type DivisionEstimate, type StopEstimate, type DivisionChest, type PackageEstimate,
 } from "./estimate";
-export { parseRates, ratesSchema, normsSchema, itemsSchema, withoutPrices, type Rates, type RatesInput, type Norms, type Items, type RatesResult } from "./rates";
+export { parseRates, upgradeRates, ratesSchema, normsSchema, itemsSchema, withoutPrices, type Rates, type RatesInput, type Norms, type Items, type RatesResult } from "./rates";
 export { pipesOfStop, formGeometry, geometryRules, type GeometryRules, type PipeDetail, type PipeState, type FormGeometry } from "./geometry";
 export { compareSchemes, compareEstimates, type Comparison } from "./compare";
 export { planScheme, countPipes, type PipeCounts, type PlanIssue, type SchemePlan, type StopKind } from "./pipes";

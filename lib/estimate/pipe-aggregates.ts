@@ -202,8 +202,6 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
     // segment, so the counts are written when it changes, not once per pipe.
     let clsFrom = 0;
     let pclsFrom = 0;
-    const clearance = chestNorms.clearanceMinMm;
-    const clearancePerD = chestNorms.clearanceFractionOfDiameter;
     for (let i = 0; i < n; i++) {
       let len = nominal - k * d;
       const shortest = nominal * MIN_LF;
@@ -218,9 +216,7 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
         footprint = d;
         vol += (PI * d * (len * areaF + 0.5 * foot[cls]) + top * d * d) * th;
       }
-      // The chest rule's width of one pipe along its row (chest.ts pipeRowWidthMm), written out here:
-      // a call per pipe costs more than the rule; the tests hold the two equal.
-      const wdt = footprint + clearance + clearancePerD * d;
+      const wdt = rowWidth(footprint, d, chestNorms);
       if (i < offN) offSide += wdt;
       else {
         if (i === offN) {

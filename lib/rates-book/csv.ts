@@ -55,12 +55,50 @@ function validDate(s: string): boolean {
   return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
 }
 
+export interface CsvOptions {
+  /**
+   * Rates of an older format in today's (the estimator's `upgradeRates`, which stored versions also
+   * pass through on reading). With it, a file written before rates were renamed still imports: a row
+   * under an old name gives the rates it now lives in, and rates the old format lacked keep the
+   * values of the version the import replaces.
+   */
+  readonly upgrade?: (old: Record<string, unknown>) => unknown;
+}
+
+const NUMBER_TEXT = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
+
+function getAt(obj: unknown, path: readonly string[]): unknown {
+  let cur = obj;
+  for (const p of path) {
+    if (typeof cur !== "object" || cur === null) return undefined;
+    cur = (cur as Record<string, unknown>)[p];
+  }
+  return cur;
+}
+
+/** One old-named row through the upgrade: the fields it now fills (with their values), or null for a name the upgrade does not know. */
+function upgradedRow(fields: readonly RateField[], upgrade: NonNullable<CsvOptions["upgrade"]>, key: string, value: string): RateValues | null {
+  const path = key.split(".");
+  const old: Record<string, unknown> = {};
+  let cur = old;
+  for (const p of path.slice(0, -1)) cur = (cur[p] = {}) as Record<string, unknown>;
+  // The upgrade works on the stored form, where measures are numbers.
+  cur[path[path.length - 1]!] = NUMBER_TEXT.test(value) ? Number(value) : value;
+  const upgraded = upgrade(old);
+  // A name the upgrade leaves in place is not an old name.
+  if (getAt(upgraded, path) !== undefined) return null;
+  const out: RateValues = {};
+  for (const [k, v] of Object.entries(flattenRates(fields, upgraded))) if (v !== "") out[k] = v;
+  return out;
+}
+
 /** Reads a CSV file against the rate book's fields; `previous` is the version it would replace. */
 export function ratesFromCsv<S extends z.ZodType>(
   schema: S,
   fields: readonly RateField[],
   text: string,
   previous: unknown,
+  options: CsvOptions = {},
 ): CsvImport<z.output<S>> {
   const fileProblems: string[] = [];
   const fail = (): CsvImport<z.output<S>> => ({ ok: false, rows: [], fileProblems, effectiveDate: null, changedCount: 0 });
@@ -84,9 +122,10 @@ export function ratesFromCsv<S extends z.ZodType>(
   }
 
   const byKey = new Map(fields.map((f) => [f.key, f]));
-  const previousValues = flattenRates(fields, previous);
   const values: RateValues = {};
   const rowOfKey = new Map<string, number>();
+  /** Rows under an old name, by row index: the fields each now fills. */
+  const oldRows = new Map<number, RateValues>();
   let effectiveDate: string | null = null;
   parsed.data.forEach((r, i) => {
     const rowNo = i + 2;
@@ -101,11 +140,28 @@ export function ratesFromCsv<S extends z.ZodType>(
       return;
     }
     const f = byKey.get(key);
-    if (!f) return addRow(i, `Row ${rowNo}: no rate is called "${key.slice(0, 60)}".`);
+    if (!f) {
+      const moved = options.upgrade ? upgradedRow(fields, options.upgrade, key, value) : null;
+      if (moved) return void oldRows.set(i, moved);
+      return addRow(i, `Row ${rowNo}: no rate is called "${key.slice(0, 60)}".`);
+    }
     if (f.kind === "text" && value.startsWith("'")) value = value.slice(1);
     values[key] = value;
   });
-  const missing = fields.filter((f) => !rowOfKey.has(f.key) && !f.optional);
+  // Old names fill the rates they became, unless the file also has the rate under its new name.
+  for (const [i, moved] of oldRows) {
+    for (const [key, value] of Object.entries(moved)) {
+      if (rowOfKey.has(key)) continue;
+      rowOfKey.set(key, i);
+      values[key] = value;
+    }
+  }
+  const previousValues = flattenRates(fields, previous);
+  if (oldRows.size) {
+    // A file of the old format has no rows for rates added since: they keep the current version's values.
+    for (const f of fields) if (!rowOfKey.has(f.key) && (previousValues[f.key] ?? "") !== "") values[f.key] = previousValues[f.key]!;
+  }
+  const missing = fields.filter((f) => !rowOfKey.has(f.key) && !f.optional && values[f.key] === undefined);
   for (const f of missing.slice(0, 20)) fileProblems.push(`The file has no row for "${f.key}" (${fullLabel(f)}).`);
   if (missing.length > 20) fileProblems.push(`…and ${missing.length - 20} more rates are missing.`);
 
@@ -127,6 +183,18 @@ export function ratesFromCsv<S extends z.ZodType>(
   const currency = values.currency ?? "";
   const rows: CsvRow[] = parsed.data.map((r, i) => {
     const key = (r.key ?? "").trim();
+    const moved = oldRows.get(i);
+    if (moved) {
+      // An old name: shown with the rates it now fills.
+      const now = Object.keys(moved).map((k) => byKey.get(k)!);
+      const value = (r.value ?? "").trim();
+      const prev = now.length ? (previousValues[now[0]!.key] ?? "") : null;
+      return {
+        row: i + 2, key, label: now.length ? `Old name of ${now.length === 1 ? fullLabel(now[0]!) : `${now.length} rates (${now.map((f) => f.key).join(", ")})`}` : "Old rate, no longer used: today's model reads it differently",
+        unit: now.length ? unitText(now[0]!, currency) : "", value, previous: prev,
+        changed: prev !== null && prev !== value && Number(prev) !== Number(value), problems: rowProblems.get(i) ?? [],
+      };
+    }
     const f = byKey.get(key);
     const value = key === EFFECTIVE_DATE_KEY ? (r.value ?? "").trim() : (values[key] ?? (r.value ?? "").trim());
     const prev = f ? (previousValues[key] ?? "") : null;

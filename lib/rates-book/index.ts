@@ -2,8 +2,9 @@
  * The firm's rate book, generated from the estimator's ratesSchema: fields, values as text, CSV and
  * comparison of versions. Pure.
  */
-import { ratesSchema, type Rates } from "@/lib/estimate";
+import { ratesSchema, upgradeRates, type Rates } from "@/lib/estimate";
 import { fieldsOf, rateTree } from "./fields";
+import { ratesFromCsv, type CsvImport } from "./csv";
 import { checkRateValues, type CheckedRates, type RateValues } from "./values";
 
 export * from "./fields";
@@ -17,4 +18,12 @@ export const rateBookFields = fieldsOf(rateBookTree);
 
 export function checkRates(values: RateValues): CheckedRates<Rates> {
   return checkRateValues(ratesSchema, rateBookFields, values);
+}
+
+/**
+ * A CSV file read against the estimator's rate book; `previous` is the version it would replace. A file
+ * exported before rates were renamed is read through the same upgrade as stored versions.
+ */
+export function rateBookFromCsv(text: string, previous: unknown): CsvImport<Rates> {
+  return ratesFromCsv(ratesSchema, rateBookFields, text, previous, { upgrade: (old) => upgradeRates(old) });
 }

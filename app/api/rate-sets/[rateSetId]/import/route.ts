@@ -1,6 +1,5 @@
 import { getRateSet, getRateSetVersion, saveRateSetVersion } from "@/db/queries/rate-sets";
-import { ratesSchema } from "@/lib/estimate";
-import { rateBookFields, ratesFromCsv } from "@/lib/rates-book";
+import { rateBookFromCsv } from "@/lib/rates-book";
 import { AppError } from "@/lib/server/errors";
 import { route } from "@/lib/server/guard";
 import { rateSetParams } from "@/lib/server/params";
@@ -15,7 +14,7 @@ import { importRatesSchema } from "@/lib/validation/rate-sets";
 export const POST = route({ permission: "rates:manage", body: importRatesSchema, params: rateSetParams }, async ({ user, params, body }) => {
   const { set } = await getRateSet({ rateSetId: params.rateSetId });
   const base = await getRateSetVersion({ rateSetId: set.id, version: set.version });
-  const result = ratesFromCsv(ratesSchema, rateBookFields, body.csv, base.rates);
+  const result = rateBookFromCsv(body.csv, base.rates);
   const preview = { ok: result.ok, rows: result.rows, fileProblems: result.fileProblems, effectiveDate: result.effectiveDate, changedCount: result.changedCount };
   if (!body.commit) return { preview };
   if (!result.ok) {
