@@ -4,7 +4,7 @@ import { z } from "zod";
 import { DEFAULT_RATES } from "@/lib/estimate/demo-rates";
 import { ratesSchema } from "@/lib/estimate";
 import {
-  checkRates, compareRates, fieldsOf, flattenRates, nestValues, rateBookFields, rateBookTree, rateTree, ratesFromCsv, ratesToCsv, EFFECTIVE_DATE_KEY,
+  checkRates, compareRates, fieldsOf, flattenRates, nestValues, rateBookFields, rateBookFromCsv, rateBookTree, rateTree, ratesFromCsv, ratesToCsv, EFFECTIVE_DATE_KEY,
 } from "./index";
 
 const values = () => flattenRates(rateBookFields, DEFAULT_RATES);
@@ -139,6 +139,41 @@ describe("CSV export and import", () => {
   it("refuses a file without key and value columns, and an empty file", () => {
     expect(ratesFromCsv(ratesSchema, rateBookFields, "a,b\n1,2\n", DEFAULT_RATES).fileProblems[0]).toMatch(/at least "key" and "value"/);
     expect(ratesFromCsv(ratesSchema, rateBookFields, "\uFEFF  \n", DEFAULT_RATES).fileProblems).toEqual(["The file is empty."]);
+  });
+
+  it("reads a file exported before rates were renamed: old names fill today's rates, rates added since keep the current values", () => {
+    // The first format's names (foot lengths at the top level, one cut-up, one cleaning and one
+    // revoicing norm per pipe, sheet thickness by size class) and none of the rates added since.
+    const rows = Papa.parse<string[]>(csv()).data.filter((r) => !/^(pipeMetal\.footLengthMm|cutUpByFamily|norms\.cleanPipe|norms\.revoice(Flue|Reed)Pipe|items|case)(\.|$)/.test(r[1] ?? ""));
+    const old = [
+      ...rows,
+      ...["over8", "4to8", "2to4", "1to2", "under1"].map((c, i) => ["", `footLengthMm.${c}`, String(400 - 50 * i), "mm"]),
+      ["", "cutUpFraction", "0.3", ""],
+      ["", "norms.cleanRetainedPipe", "0.2", "h"],
+      ["", "norms.revoicePipe", "0.5", "h"],
+      ["", "sheetThicknessMm.over8", "1.4", "mm"],
+    ];
+    const current = { ...DEFAULT_RATES, items: { ...DEFAULT_RATES.items, vehiclePerLoad: "999.00" } };
+    const r = rateBookFromCsv(Papa.unparse(old), current);
+    expect(r.fileProblems).toEqual([]);
+    expect(r.rows.flatMap((x) => x.problems)).toEqual([]);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(r.rates.pipeMetal.footLengthMm).toEqual({ over8: 400, "4to8": 350, "2to4": 300, "1to2": 250, under1: 200 });
+    expect(Object.values(r.rates.cutUpByFamily)).toEqual(Object.values(DEFAULT_RATES.cutUpByFamily).map(() => 0.3));
+    expect(r.rates.norms.cleanPipe).toEqual({ over8: 0.2, "4to8": 0.2, "2to4": 0.2, "1to2": 0.2, under1: 0.2 });
+    expect([r.rates.norms.revoiceFluePipe, r.rates.norms.revoiceReedPipe]).toEqual([0.5, 0.5]);
+    // What the old format did not have comes from the version the import replaces, not the demo values.
+    expect(r.rates.items.vehiclePerLoad).toBe("999.00");
+    expect(r.rates.case).toEqual(DEFAULT_RATES.case);
+    // The preview names what each old row became.
+    expect(r.rows.find((x) => x.key === "cutUpFraction")!.label).toMatch(/^Old name of \d+ rates \(cutUpByFamily\.principal/);
+    expect(r.rows.find((x) => x.key === "footLengthMm.over8")).toMatchObject({ label: expect.stringMatching(/^Old name of .*foot/i), previous: "420", value: "400", changed: true });
+    expect(r.rows.find((x) => x.key === "sheetThicknessMm.over8")!.label).toMatch(/no longer used/);
+    // A name that never existed is still refused.
+    const bad = rateBookFromCsv(Papa.unparse([...old, ["", "norms.noSuchNorm", "1", ""]]), current);
+    expect(bad.ok).toBe(false);
+    expect(bad.rows.flatMap((x) => x.problems)).toEqual([expect.stringMatching(/no rate is called "norms.noSuchNorm"/)]);
   });
 
   it("keeps a text that would run as a spreadsheet formula as text, and reads it back unchanged", () => {
