@@ -4,19 +4,11 @@ import { StateMark } from "@/components/ui/state-mark";
 import { departmentLabels, departments, packageLabels } from "@/lib/estimate";
 import { materialLabels } from "./format";
 import { chestWords, fitState } from "./chest-words";
-import { formatNumber } from "./format";
-import { groupThousands } from "@/lib/spec/digits";
+import { formatMoney, formatNumber } from "./format";
 import type { Figures } from "./use-figures";
 
-/**
- * An exact decimal amount as written, to the cent, grouped with thin spaces: never through a
- * float and never rounded further, so the lines shown add up to the total shown.
- */
-function money(amount: string, currency: string): string {
-  const [whole, cents = "00"] = amount.replace(/^-/, "").split(".");
-  const grouped = groupThousands(whole!, "\u202f");
-  return `${amount.startsWith("-") ? "−" : ""}${currency === "EUR" ? "€" : `${currency} `}${grouped}.${cents}`;
-}
+/** Amounts through the product's one money formatter. */
+const money = (amount: string, currency: string) => formatMoney(amount, currency);
 
 function Row({ label, value, strong = false, testId }: { label: string; value: string; strong?: boolean; testId?: string }) {
   return (

@@ -4,7 +4,8 @@ import {
   type Finding, type Origin, type PipeWork,
 } from "@/lib/estimate/scheme";
 import { formatFootage, parseFootage } from "@/lib/estimate";
-import { groupThousands } from "@/lib/spec/digits";
+import { formatAmount } from "@/lib/quote/totals";
+import { currencySymbol } from "@/lib/quote/currency";
 
 type StopLike = { footage: string | number; ranks?: number; family: string; breaks?: readonly { footages: readonly (string | number | null)[] }[] };
 
@@ -66,6 +67,34 @@ export function pitchText(stop: StopLike): string {
   }
   if (ranks > 1) return `${footageText(stop.footage)} ${romanNumeral(ranks)}`;
   return footageText(stop.footage);
+}
+
+/** Roman rank marks compared as written: "IV-VI" and "IV–VI" alike, case aside. */
+const rankMark = (text: string) => text.replace(/-/g, "–").toUpperCase();
+
+/** Whether a stop's name already ends in its ranks ("Mixture III", "Sesquialtera II", "Plein Jeu III-V"). */
+function nameCarriesRanks(stop: StopLike & { name: string }): boolean {
+  const name = stop.name.trim();
+  const space = name.lastIndexOf(" ");
+  if (space < 0) return false;
+  const last = rankMark(name.slice(space + 1));
+  const ranks = Math.max(stop.ranks ?? 1, 1);
+  if (stop.family !== "mixture") return ranks > 1 && last === romanNumeral(ranks);
+  const [lo, hi] = rankSpan(stop);
+  return [romanNumeral(ranks), romanNumeral(hi), `${romanNumeral(lo)}–${romanNumeral(hi)}`].map(rankMark).includes(last);
+}
+
+/**
+ * The pitch to print beside a stop's name: pitchText, or only the footage when the name already
+ * carries the ranks ("Mixture III" 1⅓′, "Sesquialtera II" 2⅔′), so the ranks are not said twice.
+ */
+export function pitchBesideName(stop: StopLike & { name: string }): string {
+  return nameCarriesRanks(stop) ? footageText(stop.footage) : pitchText(stop);
+}
+
+/** A stop named with its pitch, as stop lists and tenders print it: "Principal 8′", "Mixture IV", "Mixture III 1⅓′". */
+export function stopTitle(stop: StopLike & { name: string }): string {
+  return `${stop.name.trim()} ${pitchBesideName(stop)}`;
 }
 
 /** Helmholtz names with typographic primes: c'''' → c⁗ is not used by the trade; primes stay separate. */
@@ -236,15 +265,11 @@ export function couplerName(c: { from: string; to: string; octave: -1 | 0 | 1 },
 
 
 /**
- * An exact decimal amount as written, to the cent, grouped with thin spaces: never through a float,
- * so lines shown add up to the total shown. `signed` writes + for a rise (differences).
+ * An amount with its currency sign: "€1 200.00", "CHF 1 200.00" — the product's one formatter
+ * (formatAmount) behind the sign pages use (currencySymbol). `signed` writes + for a rise (differences).
  */
 export function formatMoney(amount: string, currency: string, { signed = false }: { signed?: boolean } = {}): string {
-  const negative = amount.startsWith("-");
-  const [whole, cents = "00"] = amount.replace(/^[-+]/, "").split(".");
-  const grouped = groupThousands(whole!, "\u202f");
-  // A decimal amount is zero when no digit but 0 appears in it.
-  const zero = !/[1-9]/.test(amount);
-  const sign = negative && !zero ? "−" : signed && !zero ? "+" : "";
-  return `${sign}${currency === "EUR" ? "€" : currency === "GBP" ? "£" : `${currency} `}${grouped}.${cents.padEnd(2, "0")}`;
+  const text = formatAmount(amount.replace(/^\+/, ""));
+  const rise = signed && !amount.startsWith("-") && /[1-9]/.test(amount);
+  return text.startsWith("−") ? `−${currencySymbol(currency)}${text.slice(1)}` : `${rise ? "+" : ""}${currencySymbol(currency)}${text}`;
 }

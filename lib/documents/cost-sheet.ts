@@ -5,7 +5,7 @@
  */
 import type { FileChild } from "docx";
 import { departmentLabels } from "@/lib/estimate";
-import { dispositionText, pitchText } from "@/components/spec/format";
+import { dispositionText, stopTitle } from "@/components/spec/format";
 import { formatLongDate, weeksText } from "@/lib/quote/programme-chart";
 import { hasWorkParts, type Quotation } from "@/lib/quote/quotation";
 import type { DocumentFonts } from "./assets";
@@ -32,7 +32,8 @@ export function costSheetDocument(q: Quotation, fonts: DocumentFonts) {
     [{ text: "Organ works, net (the tender's works line)", bold: true }, moneyCell(m.netAmount, cur, { bold: true })],
     ["Lump sums", moneyCell(q.totals.lumpSumsAmount, cur)],
     ["Provisional sums", moneyCell(q.totals.provisionalAmount, cur)],
-    [q.totals.discount.kind === "none" ? "Discount (none)" : "Discount", moneyCell(`-${q.totals.discount.amount}`, cur)],
+    // No discount, no line: a "−0.00" reads as a mistake.
+    ...(q.totals.discount.kind === "none" || !/[1-9]/.test(q.totals.discount.amount) ? [] : [["Discount", moneyCell(`-${q.totals.discount.amount}`, cur)] as Cell[]]),
     [{ text: "Net price quoted", bold: true }, moneyCell(q.totals.netAmount, cur, { bold: true })],
     [`Tax (${q.totals.tax.charged ? `${q.totals.tax.percent} %` : q.totals.tax.treatment})`, moneyCell(q.totals.tax.amount, cur)],
     [{ text: "Total price quoted", bold: true }, moneyCell(q.totals.totalAmount, cur, { bold: true })],
@@ -63,7 +64,8 @@ export function costSheetDocument(q: Quotation, fonts: DocumentFonts) {
   for (const d of e.divisions) {
     for (const s of d.stops) {
       if (!s.pipeHours && !s.pipes.total) continue;
-      rankRows.push([d.name, `${s.name} ${pitchText({ footage: s.footage, ranks: s.ranks, family: q.scheme.document.divisions.find((x) => x.id === d.id)?.stops.find((x) => x.id === s.id)?.family ?? "" })}`, dispositionText(s), { text: formatCount(s.pipes.new), align: "right" }, { text: formatCount(s.pipes.reused + s.pipes.restored), align: "right" }, { text: s.metalKg ? formatCount(s.metalKg, 1) : "", align: "right" }, { text: formatCount(s.pipeHours, 1), align: "right" }]);
+      const own = q.scheme.document.divisions.find((x) => x.id === d.id)?.stops.find((x) => x.id === s.id);
+      rankRows.push([d.name, stopTitle(own ?? { name: s.name, footage: s.footage, ranks: s.ranks, family: "" }), dispositionText(s), { text: formatCount(s.pipes.new), align: "right" }, { text: formatCount(s.pipes.reused + s.pipes.restored), align: "right" }, { text: s.metalKg ? formatCount(s.metalKg, 1) : "", align: "right" }, { text: formatCount(s.pipeHours, 1), align: "right" }]);
     }
   }
   body.push(table(["Division", "Stop", "Work", "New pipes", "Existing", "Metal kg", "Hours"], rankRows, [0.13, 0.3, 0.13, 0.11, 0.11, 0.11, 0.11], { fontSize: 15 }));

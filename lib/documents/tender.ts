@@ -7,7 +7,7 @@
  */
 import { AlignmentType, ImageRun, PageBreak, Paragraph, type FileChild } from "docx";
 import {
-  actionLabels, chestTypeLabels, compassText, couplerName, dispositionMark, dispositionText, pitchText, windText, workLabels, type DispositionMark,
+  actionLabels, chestTypeLabels, compassText, couplerName, dispositionMark, dispositionText, pitchBesideName, stopTitle, windText, workLabels, type DispositionMark,
 } from "@/components/spec/format";
 import { programmeWords, formatLongDate, weeksText } from "@/lib/quote/programme-chart";
 import { taxTreatmentLabels } from "@/lib/quote/commercial";
@@ -117,7 +117,7 @@ function specification(q: Quotation, no: Map<string, number>): FileChild[] {
       return [
         { text: `${no.get(s.id)}.`, align: "right", color: TIN },
         { text: `${s.name}${note.length ? ` (${note.join("; ")})` : ""}`, strike: s.origin === "removed" },
-        { text: pitchText(s), align: "right" },
+        { text: pitchBesideName(s), align: "right" },
         { text: dispositionText(s), color: SOFT },
         { text: sp ? formatCount(sp.pipes.total + sp.pipes.prepared) : "", align: "right" },
       ];
@@ -211,7 +211,7 @@ function scopeOfWorks(q: Quotation): FileChild[] {
       const pipes = e ? (mark === "new" || mark === "extension" ? e.pipes.new || e.pipes.total : mark === "removed" ? e.pipes.removed : mark === "prepared" ? e.pipes.prepared : e.pipes.total) : 0;
       // A stop with more than one kind of work says all of them ("Existing: restored, revoiced").
       const more = s.origin === "existing" && s.work.length > 1 ? ` (${dispositionText(s).replace(/^Existing: /, "")})` : "";
-      out.push(bullet([run(`${d.name}: `, { color: SOFT }), run(`${s.name} ${pitchText(s)}${more}`), run(pipes ? ` — ${formatCount(pipes)} pipes` : "", { color: SOFT })]));
+      out.push(bullet([run(`${d.name}: `, { color: SOFT }), run(`${stopTitle(s)}${more}`), run(pipes ? ` — ${formatCount(pipes)} pipes` : "", { color: SOFT })]));
     }
   }
   out.push(heading("Windchests, action and console", 3));

@@ -166,9 +166,12 @@ export function sumMoney(amounts: readonly string[]): string {
   return s2(amounts.reduce((s, a) => s.plus(a), new Dec(0)));
 }
 
-/** "1 000 000.01" with thin spaces between thousands: never through a float, never rounded further. */
+/**
+ * "1 000 000.01" with thin spaces between thousands: never through a float, never rounded further.
+ * The product's one money formatter; a zero is never signed ("−0.00" reads as a mistake).
+ */
 export function formatAmount(amount: string): string {
-  const negative = amount.startsWith("-");
+  const negative = amount.startsWith("-") && /[1-9]/.test(amount);
   const [whole, fraction = "00"] = amount.replace(/^-/, "").split(".");
   return `${negative ? "−" : ""}${groupThousands(whole!, "\u202f")}.${fraction.padEnd(2, "0")}`;
 }

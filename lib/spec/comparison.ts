@@ -9,7 +9,7 @@ import { departmentLabels, departments, type Estimate, type Rates, type Scheme }
 import { compareEstimates, compareStops } from "@/lib/estimate/compare";
 import { diffAmount } from "@/lib/estimate/money";
 import { pipeWorks, type Origin, type PipeWork } from "@/lib/estimate/scheme";
-import { dispositionMark, dispositionText, originLabels, pipeWorkLabels, pitchText, type DispositionMark } from "@/components/spec/format";
+import { dispositionMark, dispositionText, originLabels, pipeWorkLabels, pitchText, stopTitle, type DispositionMark } from "@/components/spec/format";
 import type { DocStop, SchemeDocument, Tuning } from "./document";
 import { estimateDocument } from "./estimate";
 
@@ -248,7 +248,7 @@ export function costOfChanges({ base, other, tuning, rates }: { base: SchemeDocu
   const diff = compareStops(a.scheme, b.scheme);
   const baseTotal = a.estimate?.money.totalAmount ?? null;
   const label = (doc: SchemeDocument, stopId: string) => {
-    for (const d of doc.divisions) for (const s of d.stops) if (s.id === stopId) return `${s.name} ${pitchText(s)} (${d.name})`;
+    for (const d of doc.divisions) for (const s of d.stops) if (s.id === stopId) return `${stopTitle(s)} (${d.name})`;
     return stopId;
   };
   const cost = (stopId: string): string | null => {

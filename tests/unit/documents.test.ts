@@ -53,6 +53,14 @@ describe("the tender for the large example, read back with mammoth", () => {
     expect(text).toContain("2⅔′");
   });
 
+  it("names a mixture once with its ranks, even when its name already carries them", () => {
+    const named = q.scheme.document.divisions.flatMap((d) => d.stops).filter((s) => s.family === "mixture" && / [IVX]+$/.test(s.name));
+    expect(named.length).toBeGreaterThan(2);
+    for (const s of named) expect(text, s.name).not.toContain(`${s.name} ${pitchText(s)}`);
+    expect(text).not.toMatch(/\b(II|III|IV|V|VI) \1\b/);
+    expect(text).toContain("Pedal: Mixture IV 2⅔′ — ");
+  });
+
   it("gives every division's pipe total and price, and the grand total, exactly as the frozen estimate and totals have them", () => {
     for (const d of q.estimate.divisions) {
       const stops = d.stops.filter((s) => s.origin !== "removed").length;
@@ -135,6 +143,13 @@ describe("the internal cost sheet and the workshop's work list", () => {
     expect(doc).toContain(norm(`Contingency ${m.contingency.percent} % € ${formatMoney(m.contingency.amount)}`));
     for (const l of m.labour) expect(doc, l.label).toContain(norm(`${l.label} ${formatCount(l.hours, 1)} € ${formatMoney(l.rateAmount)} € ${formatMoney(l.amount)}`));
     expect(doc).toContain(norm(`Total price quoted € ${formatMoney(q.totals.totalAmount)}`));
+    // The discount's line when there is one; no line, and never a signed zero, when there is none; the mixtures' ranks once.
+    expect(q.totals.discount.kind).not.toBe("none");
+    expect(doc).toContain(norm(`Discount € −${formatMoney(q.totals.discount.amount)}`));
+    expect(doc).not.toMatch(/\b(II|III|IV|V|VI) \1\b/);
+    const plain = norm((await mammoth.extractRawText({ buffer: await writeDocument("cost-sheet", exampleQuotation(large, { discount: { kind: "none", value: "0" } })) })).value);
+    expect(plain).toContain("Total price quoted");
+    expect(plain).not.toMatch(/Discount|−\s?€?\s?0\.00|€ −0\.00/);
   }, 60_000);
 
   it("the work list has every rank to make, restore, revoice or move, biggest first within each kind of work, and no prices", async () => {
