@@ -3,7 +3,7 @@ import bcrypt from "bcryptjs";
 import { drizzle } from "drizzle-orm/node-postgres";
 import { and, eq, sql } from "drizzle-orm";
 import { Pool } from "pg";
-import { pitchText } from "../components/spec/format";
+import { stopTitle } from "../components/spec/format";
 import { composeMail } from "../lib/mail/compose";
 import { appOrigin, env } from "../lib/env";
 import { INVITATION_DAYS } from "../lib/spec/committee";
@@ -76,7 +76,7 @@ async function main() {
         const label = (scheme: number, stopId: string | null) => {
           if (!stopId) return null;
           const doc = schemeDocumentSchema.parse(demo.schemes[scheme]);
-          for (const div of doc.divisions) for (const s of div.stops) if (s.id === stopId) return `${s.name} ${pitchText(s)} (${div.name})`;
+          for (const div of doc.divisions) for (const s of div.stops) if (s.id === stopId) return `${stopTitle(s)} (${div.name})`;
           throw new Error(`demo discussion: no stop ${stopId}`);
         };
         await tx.insert(schema.schemeComments).values(

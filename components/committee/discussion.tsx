@@ -2,7 +2,7 @@
 import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
 import { api, ApiError, errorText } from "@/components/spec/api";
-import { formatDateTime, pitchText } from "@/components/spec/format";
+import { formatDateTime, stopTitle } from "@/components/spec/format";
 import { useAddComment, useAddNote, useComments, useDeleteComment, useDeleteNote, useNotes } from "@/lib/query/hooks";
 import { keys } from "@/lib/query/keys";
 import type { CommentRead } from "@/lib/spec/committee";
@@ -79,7 +79,7 @@ export function SchemeDiscussion({ schemeId, selfId, canComment, canNotes }: { s
   const delComment = useDeleteComment(schemeId);
   const delNote = useDeleteNote(schemeId);
   const stops = useMemo(
-    () => (scheme.data?.document.divisions ?? []).flatMap((d) => d.stops.map((s) => ({ id: s.id, label: `${d.name}: ${s.name} ${pitchText(s)}` }))),
+    () => (scheme.data?.document.divisions ?? []).flatMap((d) => d.stops.map((s) => ({ id: s.id, label: `${d.name}: ${stopTitle(s)}` }))),
     [scheme.data],
   );
   const list = tab === "comments" ? comments : notes;

@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { divisions, schemeComments, schemeNotes, stops, users } from "@/db/schema";
-import { pitchText } from "@/components/spec/format";
+import { stopTitle } from "@/components/spec/format";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
 import { sendCommentNotice } from "@/lib/server/notify";
@@ -23,8 +23,8 @@ async function stopLabel(schemeId: string, stopId: string): Promise<string> {
     .limit(1);
   if (!row) throw new AppError("invalid", "That stop is not in this scheme (it may have been removed); reload the page.", { stopId: ["That stop is not in this scheme."] });
   const props = row.props as { footage?: string | number; ranks?: number; family?: string };
-  const pitch = props.footage !== undefined ? ` ${pitchText({ footage: props.footage, ranks: props.ranks, family: props.family ?? "" })}` : "";
-  return `${row.name}${pitch} (${row.divisionName})`;
+  const title = props.footage !== undefined ? stopTitle({ name: row.name, footage: props.footage, ranks: props.ranks, family: props.family ?? "" }) : row.name;
+  return `${title} (${row.divisionName})`;
 }
 
 async function listThread(thread: Thread, schemeId: string): Promise<CommentRead[]> {

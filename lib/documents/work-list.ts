@@ -6,7 +6,7 @@
  */
 import type { FileChild } from "docx";
 import { departmentLabels, type StopEstimate } from "@/lib/estimate";
-import { dispositionText, materialLabels, pitchText } from "@/components/spec/format";
+import { dispositionText, materialLabels, pitchBesideName } from "@/components/spec/format";
 import { weeksText } from "@/lib/quote/programme-chart";
 import type { Quotation } from "@/lib/quote/quotation";
 import type { DocumentFonts } from "./assets";
@@ -57,7 +57,7 @@ export function workItems(q: Quotation): WorkItem[] {
       else if (s.work.includes("revoiced")) group = 4;
       else if (s.work.includes("relocated") || s.work.includes("rescaled")) group = 5;
       else continue;
-      items.push({ group: GROUPS[group]!, division: d.name, stop: s, pitch: pitchText(own), material: materialLabels[src.material], family: src.family, order: group });
+      items.push({ group: GROUPS[group]!, division: d.name, stop: s, pitch: pitchBesideName(own), material: materialLabels[src.material], family: src.family, order: group });
     }
   }
   return items

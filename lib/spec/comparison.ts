@@ -9,7 +9,7 @@ import { departmentLabels, departments, type Estimate, type Rates, type Scheme }
 import { compareEstimates, compareStops } from "@/lib/estimate/compare";
 import { diffAmount } from "@/lib/estimate/money";
 import { pipeWorks, type Origin, type PipeWork } from "@/lib/estimate/scheme";
-import { dispositionMark, dispositionText, originLabels, pipeWorkLabels, pitchText, stopTitle, type DispositionMark } from "@/components/spec/format";
+import { dispositionMark, dispositionText, originLabels, pipeWorkLabels, pitchBesideName, pitchText, stopTitle, type DispositionMark } from "@/components/spec/format";
 import type { DocStop, SchemeDocument, Tuning } from "./document";
 import { estimateDocument } from "./estimate";
 
@@ -107,7 +107,7 @@ function estimated(doc: SchemeDocument, tuning: Tuning, rates: Rates): Estimated
 }
 
 const cellOf = (stop: DocStop, mark: "base" | "same" | "added" | "changed", changes: FieldChangeText[] = []): StopCell => ({
-  mark, name: stop.name, pitch: pitchText(stop), disposition: dispositionMark(stop), dispositionText: dispositionText(stop), changes,
+  mark, name: stop.name, pitch: pitchBesideName(stop), disposition: dispositionMark(stop), dispositionText: dispositionText(stop), changes,
 });
 
 function figureRow(key: string, label: string, unit: string, values: (number | null)[], diffs: (number | null)[]): FigureRow<number> {
