@@ -167,7 +167,11 @@ export function estimateScheme(scheme: Scheme, rates: Rates, plan: SchemePlan = 
   const money = priceCentres(centres, rates);
   const costOf = new Map(money.byDivision.map((d) => [d.division, d.directCostAmount]));
   const byDivision = new Map<string, CostCentre[]>();
-  for (const c of dw.centres) byDivision.set(c.division!, [...(byDivision.get(c.division!) ?? []), c]);
+  for (const c of dw.centres) {
+    const list = byDivision.get(c.division!);
+    if (list) list.push(c);
+    else byDivision.set(c.division!, [c]);
+  }
   const divisions: DivisionEstimate[] = dw.divisions.map((d: DivisionDraft, i) => {
     const hours = hoursOf(byDivision.get(d.id) ?? []);
     return {
@@ -179,9 +183,11 @@ export function estimateScheme(scheme: Scheme, rates: Rates, plan: SchemePlan = 
   });
   const wideHours = hoursOf(ow.centres);
   const allHours = sumHours([...divisions.map((d) => d.hours), wideHours]);
+  const byPackage = new Map<PackageId, CostCentre[]>(packages.map((p) => [p, []]));
+  for (const c of centres) byPackage.get(c.package)!.push(c);
   const packageEstimates: PackageEstimate[] = packages
     .map((p) => {
-      const hours = hoursOf(centres.filter((c) => c.package === p));
+      const hours = hoursOf(byPackage.get(p)!);
       return { package: p, label: packageLabels[p], hours, hoursTotal: totalHours(hours) };
     })
     .filter((p) => p.hoursTotal > 0 || money.byPackage.some((b) => b.package === p.package));
