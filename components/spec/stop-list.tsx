@@ -1,6 +1,6 @@
 /** A scheme's stop list in the trade's usual layout: divisions with compass and details, stops numbered throughout. */
 import type { SchemeDocument } from "@/lib/spec/document";
-import { actionLabels, couplerName, chestTypeLabels, compassText, materialLabels, noteText, pitchText, resonatorLengthLabels, workLabels, windText } from "./format";
+import { actionLabels, couplerName, chestTypeLabels, compassText, materialLabels, noteText, pitchBesideName, resonatorLengthLabels, workLabels, windText } from "./format";
 import { Treatment } from "./treatment-mark";
 
 export function StopList({ doc }: { doc: SchemeDocument }) {
@@ -46,7 +46,7 @@ export function StopList({ doc }: { doc: SchemeDocument }) {
                           {s.name}
                           {note.length > 0 && <span className="text-sm italic text-ink-soft"> ({note.join("; ")})</span>}
                         </td>
-                        <td className="num w-16 whitespace-nowrap pr-3 text-right">{pitchText(s)}</td>
+                        <td className="num w-16 whitespace-nowrap pr-3 text-right">{pitchBesideName(s)}</td>
                         <td className="w-40 font-sans text-xs text-ink-soft"><Treatment stop={s} /></td>
                       </tr>
                     );
