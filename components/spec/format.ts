@@ -4,7 +4,7 @@ import {
   type Finding, type Origin, type PipeWork,
 } from "@/lib/estimate/scheme";
 import { formatFootage, parseFootage } from "@/lib/estimate";
-import { formatAmount } from "@/lib/quote/totals";
+import { formatAmount } from "@/lib/quote/amount-text";
 import { currencySymbol } from "@/lib/quote/currency";
 
 type StopLike = { footage: string | number; ranks?: number; family: string; breaks?: readonly { footages: readonly (string | number | null)[] }[] };

@@ -8,7 +8,6 @@
 import DecimalJs from "decimal.js";
 import type { Estimate } from "@/lib/estimate";
 import { hundredths, lumpSumCategoryLabels, taxCharged, type Commercial, type LumpSumCategory } from "./commercial";
-import { groupThousands } from "@/lib/spec/digits";
 
 /** A private Decimal: 40 significant digits, half-up rounding as on an invoice; no global configuration touched. */
 const Dec = DecimalJs.clone({ precision: 40, rounding: DecimalJs.ROUND_HALF_UP });
@@ -166,15 +165,8 @@ export function sumMoney(amounts: readonly string[]): string {
   return s2(amounts.reduce((s, a) => s.plus(a), new Dec(0)));
 }
 
-/**
- * "1 000 000.01" with thin spaces between thousands: never through a float, never rounded further.
- * The product's one money formatter; a zero is never signed ("−0.00" reads as a mistake).
- */
-export function formatAmount(amount: string): string {
-  const negative = amount.startsWith("-") && /[1-9]/.test(amount);
-  const [whole, fraction = "00"] = amount.replace(/^-/, "").split(".");
-  return `${negative ? "−" : ""}${groupThousands(whole!, "\u202f")}.${fraction.padEnd(2, "0")}`;
-}
+/** The one money formatter (amount-text.ts), here too for the quotation's pages. */
+export { formatAmount } from "./amount-text";
 
 /** Exact difference b − a of two amounts. */
 export function diffMoney(a: string, b: string): string {
