@@ -16,7 +16,7 @@ import {
   type UniqueIdentifier,
 } from "@dnd-kit/core";
 import { horizontalListSortingStrategy, SortableContext } from "@dnd-kit/sortable";
-import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from "react";
+import { memo, useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from "react";
 import type { SchemeDocument } from "@/lib/spec/document";
 import type { ColumnFigures } from "./board-figures";
 import { CarryContext } from "./carry-context";
@@ -62,7 +62,11 @@ function dropIndexAt(board: HTMLElement, divisionId: string, clientY: number): n
   return i;
 }
 
-export function DivisionBoard({
+/**
+ * The board of divisions and stops. Memoised: the editor draws again for its own state (a notice, the
+ * save badge, new figures), which reaches the board only when the document or the column figures change.
+ */
+export const DivisionBoard = memo(function DivisionBoard({
   doc,
   columnFigures,
   editable,
@@ -299,8 +303,11 @@ export function DivisionBoard({
         <div
           ref={boardRef}
           onKeyDown={onBoardKeyDown}
-          className="board-scroll flex flex-col gap-3 pb-3 md:grid md:auto-cols-[minmax(15rem,20rem)] md:grid-flow-col md:items-start md:overflow-x-auto"
+          className="board-scroll flex flex-col gap-3 pb-3 data-[pointer-drag]:pointer-events-none md:grid md:auto-cols-[minmax(15rem,20rem)] md:grid-flow-col md:items-start md:overflow-x-auto"
           data-testid="board"
+          // While the pointer drags, the cards under it take no hover: dnd-kit follows the pointer on the
+          // document, and a hover style redrawn at each card crossed cost a repaint of the column.
+          data-pointer-drag={drag?.by === "pointer" || undefined}
           data-carrying={carried ? carried.id : undefined}
         >
           {shown.divisions.map((division) => (
@@ -338,4 +345,4 @@ export function DivisionBoard({
       </DragOverlay>
     </DndContext>
   );
-}
+});

@@ -1,7 +1,7 @@
 "use client";
 import { useSortable } from "@dnd-kit/sortable";
 import { CSS } from "@dnd-kit/utilities";
-import { Fragment, memo } from "react";
+import { Fragment, memo, startTransition, useEffect, useState } from "react";
 import { StateMark } from "@/components/ui/state-mark";
 import type { DocDivision } from "@/lib/spec/document";
 import type { ColumnFigures } from "./board-figures";
@@ -22,6 +22,14 @@ function EnclosedMark() {
 function DropLine() {
   return <li aria-hidden="true" className="-my-1 h-1 rounded bg-brass" data-testid="drop-line" />;
 }
+
+/**
+ * Cards drawn with the page (server and hydration): enough to fill a tall screen. The rest follow just
+ * after, a batch at a time in transitions React can interrupt, so a 150-stop scheme hydrates about a
+ * third of its cards and no batch holds the page for long.
+ */
+const FIRST_CARDS = 16;
+const CARDS_PER_BATCH = 8;
 
 /**
  * One division on the board. Memoised: it is drawn again only when its division, its figures, the
@@ -56,6 +64,13 @@ export const DivisionColumn = memo(function DivisionColumn({
     data: { type: "division", divisionId: division.id },
     disabled: editable ? { draggable: false, droppable: false } : true,
   });
+  const [shown, setShown] = useState(FIRST_CARDS);
+  const stopCount = division.stops.length;
+  useEffect(() => {
+    if (shown >= stopCount) return;
+    startTransition(() => setShown((n) => (n + CARDS_PER_BATCH >= stopCount ? Infinity : n + CARDS_PER_BATCH)));
+  }, [shown, stopCount]);
+  const stops = shown >= stopCount ? division.stops : division.stops.slice(0, shown);
   const state = figures?.fit ?? "unknown";
   const stopOver = activeType === "stop" && dropIndex !== null;
   return (
@@ -107,7 +122,7 @@ export const DivisionColumn = memo(function DivisionColumn({
         )}
       </header>
       <ol className="flex min-h-16 flex-1 flex-col gap-1.5 p-2" aria-label={`Stops of the ${division.name}`}>
-        {division.stops.map((s, i) => (
+        {stops.map((s, i) => (
           <Fragment key={s.id}>
             {dropIndex === i && <DropLine />}
             <StopCard stop={s} pipesText={figures?.pipesText[s.id] ?? "– pipes"} divisionName={division.name} editable={editable} onOpen={onOpenStop} />

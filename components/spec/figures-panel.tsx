@@ -1,4 +1,5 @@
 "use client";
+import { memo } from "react";
 import { Caution } from "@/components/ui/caution";
 import { StateMark } from "@/components/ui/state-mark";
 import { departmentLabels, departments, packageLabels } from "@/lib/estimate";
@@ -24,7 +25,7 @@ function Row({ label, value, strong = false, testId }: { label: string; value: s
  * while they are behind the document they are marked "updating", and before the first arrive the
  * panel says it is working them out.
  */
-export function FiguresPanel({ figures, showMoney, stale = false }: { figures: Figures | null; showMoney: boolean; stale?: boolean }) {
+export const FiguresPanel = memo(function FiguresPanel({ figures, showMoney, stale = false }: { figures: Figures | null; showMoney: boolean; stale?: boolean }) {
   if (!figures) {
     return (
       <section className="panel p-3 text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="pending" data-stale="true" aria-busy="true">
@@ -170,4 +171,4 @@ export function FiguresPanel({ figures, showMoney, stale = false }: { figures: F
       </div>
     </section>
   );
-}
+});

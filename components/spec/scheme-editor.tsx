@@ -197,12 +197,13 @@ export function SchemeEditor({
 
   return (
     <div className="space-y-3">
-      {/* Title and toolbar */}
+      {/* Title and toolbar. Its links are not prefetched: on opening a large scheme, four server
+          renders of other pages would compete with this page's own hydration and first figures. */}
       <div className="flex flex-wrap items-end gap-x-4 gap-y-2">
         <div className="min-w-0 flex-1">
           <nav aria-label="Breadcrumb" className="text-xs text-tin">
-            <Link href="/projects" className="hover:text-ink">Projects</Link> <span aria-hidden="true">/</span>{" "}
-            <Link href={`/projects/${projectId}`} className="hover:text-ink">{projectName}</Link> <span aria-hidden="true">/</span>
+            <Link href="/projects" prefetch={false} className="hover:text-ink">Projects</Link> <span aria-hidden="true">/</span>{" "}
+            <Link href={`/projects/${projectId}`} prefetch={false} className="hover:text-ink">{projectName}</Link> <span aria-hidden="true">/</span>
           </nav>
           <div className="flex items-baseline gap-3">
             <h1 className="truncate text-2xl font-semibold" data-testid="scheme-name">{doc.name}</h1>
@@ -234,8 +235,8 @@ export function SchemeEditor({
               Revisions
             </button>
           )}
-          <Link className="btn" href={`/projects/${projectId}/schemes/${initialScheme.id}/stop-list`}>Stop list</Link>
-          {showFigures && <Link className="btn" href={`/projects/${projectId}/schemes/${initialScheme.id}/pipes`}>Pipe tables</Link>}
+          <Link className="btn" prefetch={false} href={`/projects/${projectId}/schemes/${initialScheme.id}/stop-list`}>Stop list</Link>
+          {showFigures && <Link className="btn" prefetch={false} href={`/projects/${projectId}/schemes/${initialScheme.id}/pipes`}>Pipe tables</Link>}
         </div>
       </div>
 

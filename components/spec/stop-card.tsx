@@ -1,6 +1,6 @@
 "use client";
 import { useDraggable } from "@dnd-kit/core";
-import { memo, useContext } from "react";
+import { memo, useCallback, useContext } from "react";
 import type { DocStop } from "@/lib/spec/document";
 import { CarryContext } from "./carry-context";
 import { pitchText } from "./format";
@@ -8,6 +8,15 @@ import { Pitch } from "./pitch";
 import { Treatment } from "./treatment-mark";
 
 export { pipesWords } from "./board-figures";
+
+// One element for every grip: React skips an unchanged element, so a grip drawn again redraws no dots.
+const gripDots = (
+  <svg viewBox="0 0 10 16" className="h-4 w-2.5" aria-hidden="true" fill="currentColor">
+    <circle cx="2.5" cy="3" r="1.3" /><circle cx="7.5" cy="3" r="1.3" />
+    <circle cx="2.5" cy="8" r="1.3" /><circle cx="7.5" cy="8" r="1.3" />
+    <circle cx="2.5" cy="13" r="1.3" /><circle cx="7.5" cy="13" r="1.3" />
+  </svg>
+);
 
 /** The grip of a stop or a division: the pointer drags it (dnd-kit), the keyboard carries it (division-board.tsx). */
 export function DragHandle({
@@ -34,11 +43,7 @@ export function DragHandle({
       data-carry-type={carry.type}
       data-carry-id={carry.id}
     >
-      <svg viewBox="0 0 10 16" className="h-4 w-2.5" aria-hidden="true" fill="currentColor">
-        <circle cx="2.5" cy="3" r="1.3" /><circle cx="7.5" cy="3" r="1.3" />
-        <circle cx="2.5" cy="8" r="1.3" /><circle cx="7.5" cy="8" r="1.3" />
-        <circle cx="2.5" cy="13" r="1.3" /><circle cx="7.5" cy="13" r="1.3" />
-      </svg>
+      {gripDots}
     </button>
   );
 }
@@ -72,9 +77,31 @@ const CardBody = memo(function CardBody({ stop, pipesText, editable, onOpen }: {
 });
 
 /**
- * A stop on the board. Only its grip is wired to the pointer (dnd-kit's useDraggable); where it
- * lands is worked out by the board from the pointer, so no card is measured or redrawn while the
- * pointer moves across a column.
+ * The grip of a stop: the one part of a card wired to dnd-kit. useDraggable reads dnd-kit's context,
+ * which changes when a drag starts, crosses a column or ends; kept in this small component, only the
+ * 150 grips are drawn again then, never the cards. Its node is the card (for the overlay's start).
+ */
+const StopGrip = memo(function StopGrip({ stop, disabled }: { stop: DocStop; disabled: boolean }) {
+  const { attributes, listeners, setNodeRef, setActivatorNodeRef } = useDraggable({
+    id: `stop:${stop.id}`,
+    data: { type: "stop", stopId: stop.id },
+    disabled,
+  });
+  const setRef = useCallback(
+    (el: HTMLElement | null) => {
+      setActivatorNodeRef(el);
+      setNodeRef(el?.closest("li") ?? null);
+    },
+    [setActivatorNodeRef, setNodeRef],
+  );
+  return <DragHandle label={`Move ${stop.name} ${pitchText(stop)}`} carry={{ type: "stop", id: stop.id }} listeners={listeners} attributes={attributes} setRef={setRef} />;
+});
+
+/**
+ * A stop on the board. Only its grip is wired to the pointer (StopGrip); where it lands is worked
+ * out by the board from the pointer, so no card is measured or redrawn while the pointer moves. The
+ * card being dragged is marked by CSS from its grip (dnd-kit sets aria-pressed on it), not by a
+ * redraw. Off-screen cards skip layout and paint (content-visibility), so a drag repaints what shows.
  */
 export const StopCard = memo(function StopCard({
   stop,
@@ -89,17 +116,11 @@ export const StopCard = memo(function StopCard({
   editable: boolean;
   onOpen: (stopId: string) => void;
 }) {
-  const { attributes, listeners, setNodeRef, setActivatorNodeRef, isDragging } = useDraggable({
-    id: `stop:${stop.id}`,
-    data: { type: "stop", stopId: stop.id },
-    disabled: !editable,
-  });
   const carried = useContext(CarryContext);
   const isCarried = carried?.type === "stop" && carried.id === stop.id;
   return (
     <li
-      ref={setNodeRef}
-      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] ${isDragging ? "border-dashed border-brass opacity-40" : isCarried ? "border-brass ring-2 ring-brass/60" : "border-tin-rule"}`}
+      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] [contain-intrinsic-size:auto_3.375rem] [content-visibility:auto] has-[[aria-pressed=true]]:border-dashed has-[[aria-pressed=true]]:border-brass has-[[aria-pressed=true]]:opacity-40 ${isCarried ? "border-brass ring-2 ring-brass/60" : "border-tin-rule"}`}
       data-carried={isCarried || undefined}
       data-testid={`stop-${stop.name}`}
       data-stop-id={stop.id}
@@ -107,7 +128,7 @@ export const StopCard = memo(function StopCard({
     >
       {editable && (
         <span className="pt-0.5">
-          <DragHandle label={`Move ${stop.name} ${pitchText(stop)}`} carry={{ type: "stop", id: stop.id }} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />
+          <StopGrip stop={stop} disabled={!editable} />
         </span>
       )}
       <CardBody stop={stop} pipesText={pipesText} editable={editable} onOpen={onOpen} />

@@ -25,12 +25,23 @@ export async function openAs(page: Page, user: Pick<TestUser, "email" | "passwor
 
 /**
  * Waits until React has hydrated the page (its handlers are on the elements), so a click is not
- * lost on server-rendered markup. The page has no Suspense boundaries, so it hydrates as a whole.
+ * lost on server-rendered markup. A page with a loading skeleton streams: the header hydrates
+ * first and the page's own part later, so this waits for the skeleton to be gone and for every
+ * control in the page's main part to be hydrated too.
  */
 export async function whenInteractive(page: Page) {
-  const button = page.getByRole("button", { name: "Sign out" });
   await expect
-    .poll(() => button.evaluate((el) => Object.keys(el).some((k) => k.startsWith("__reactProps"))), { message: "the page is hydrated" })
+    .poll(
+      () =>
+        page.evaluate(() => {
+          const hydrated = (el: Element) => Object.keys(el).some((k) => k.startsWith("__reactProps"));
+          const signOut = [...document.querySelectorAll("button")].find((b) => b.textContent?.trim() === "Sign out");
+          if (!signOut || !hydrated(signOut)) return false;
+          if (document.querySelector("[data-skeleton]")) return false;
+          return [...document.querySelectorAll("main button, main a[href], main input, main select, main textarea")].every(hydrated);
+        }),
+      { message: "the page is hydrated" },
+    )
     .toBe(true);
 }
 
