@@ -303,11 +303,8 @@ export const DivisionBoard = memo(function DivisionBoard({
         <div
           ref={boardRef}
           onKeyDown={onBoardKeyDown}
-          className="board-scroll flex flex-col gap-3 pb-3 data-[pointer-drag]:pointer-events-none md:grid md:auto-cols-[minmax(15rem,20rem)] md:grid-flow-col md:items-start md:overflow-x-auto"
+          className="board-scroll flex flex-col gap-3 pb-3 md:grid md:auto-cols-[minmax(15rem,20rem)] md:grid-flow-col md:items-start md:overflow-x-auto"
           data-testid="board"
-          // While the pointer drags, the cards under it take no hover: dnd-kit follows the pointer on the
-          // document, and a hover style redrawn at each card crossed cost a repaint of the column.
-          data-pointer-drag={drag?.by === "pointer" || undefined}
           data-carrying={carried ? carried.id : undefined}
         >
           {shown.divisions.map((division) => (

@@ -1,6 +1,6 @@
 "use client";
 import { useDraggable } from "@dnd-kit/core";
-import { memo, useCallback, useContext } from "react";
+import { memo, useCallback, useContext, useLayoutEffect } from "react";
 import type { DocStop } from "@/lib/spec/document";
 import { CarryContext } from "./carry-context";
 import { pitchText } from "./format";
@@ -82,7 +82,7 @@ const CardBody = memo(function CardBody({ stop, pipesText, editable, onOpen }: {
  * 150 grips are drawn again then, never the cards. Its node is the card (for the overlay's start).
  */
 const StopGrip = memo(function StopGrip({ stop, disabled }: { stop: DocStop; disabled: boolean }) {
-  const { attributes, listeners, setNodeRef, setActivatorNodeRef } = useDraggable({
+  const { attributes, listeners, setNodeRef, setActivatorNodeRef, isDragging, node } = useDraggable({
     id: `stop:${stop.id}`,
     data: { type: "stop", stopId: stop.id },
     disabled,
@@ -94,14 +94,17 @@ const StopGrip = memo(function StopGrip({ stop, disabled }: { stop: DocStop; dis
     },
     [setActivatorNodeRef, setNodeRef],
   );
+  // The card left behind shows as a dashed ghost: one attribute on one element, no redraw of the card.
+  useLayoutEffect(() => {
+    node.current?.toggleAttribute("data-dragging", isDragging);
+  }, [isDragging, node]);
   return <DragHandle label={`Move ${stop.name} ${pitchText(stop)}`} carry={{ type: "stop", id: stop.id }} listeners={listeners} attributes={attributes} setRef={setRef} />;
 });
 
 /**
  * A stop on the board. Only its grip is wired to the pointer (StopGrip); where it lands is worked
  * out by the board from the pointer, so no card is measured or redrawn while the pointer moves. The
- * card being dragged is marked by CSS from its grip (dnd-kit sets aria-pressed on it), not by a
- * redraw. Off-screen cards skip layout and paint (content-visibility), so a drag repaints what shows.
+ * card being dragged is marked by its grip with an attribute (data-dragging), not by a redraw.
  */
 export const StopCard = memo(function StopCard({
   stop,
@@ -120,7 +123,7 @@ export const StopCard = memo(function StopCard({
   const isCarried = carried?.type === "stop" && carried.id === stop.id;
   return (
     <li
-      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] [contain-intrinsic-size:auto_3.375rem] [content-visibility:auto] has-[[aria-pressed=true]]:border-dashed has-[[aria-pressed=true]]:border-brass has-[[aria-pressed=true]]:opacity-40 ${isCarried ? "border-brass ring-2 ring-brass/60" : "border-tin-rule"}`}
+      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] data-[dragging]:border-dashed data-[dragging]:border-brass data-[dragging]:opacity-40 ${isCarried ? "border-brass ring-2 ring-brass/60" : "border-tin-rule"}`}
       data-carried={isCarried || undefined}
       data-testid={`stop-${stop.name}`}
       data-stop-id={stop.id}
