@@ -1,32 +1,36 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
+import dynamic from "next/dynamic";
 import Link from "next/link";
 import { useCallback, useEffect, useMemo, useReducer, useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { StopFiles } from "@/components/files/stop-files";
 import { Dialog } from "@/components/ui/dialog";
 import { StateMark } from "@/components/ui/state-mark";
 import { schemeDocumentSchema, type SchemeDocument, type SchemeRead } from "@/lib/spec/document";
-import { AccessoriesEditor } from "./accessories-editor";
-import { WorksEditor } from "./works-editor";
-import { ChestsView } from "./chests-view";
-import { ScalesView } from "@/components/drawing/scales-view";
 import { DivisionBoard } from "./division-board";
-import { DivisionForm } from "./division-form";
 import { useColumnFigures } from "./board-figures";
 import { addDivision, addStop, findStop, moveStop, newId, removeDivision, removeStop, setAccessories, setWorks, updateDivision, updateStop } from "./doc-ops";
 import { FiguresPanel } from "./figures-panel";
 import { formatDateTime, formatTimeOfDay, pitchText } from "./format";
 import { historyReducer, initHistory, nextRedo, nextUndo } from "./history";
-import { RevisionsPanel } from "./revisions-panel";
 import { SaveStateBadge } from "./save-state";
-import { StopDetails } from "./stop-details";
-import { StopForm } from "./stop-form";
 import { drawingRulesOf, useFigures, type FigureSource } from "./use-figures";
 import { clearDraft, readDraft, sameDocument, type UnsavedDraft } from "./unsaved-drafts";
 import { useLeaveGuard } from "./use-leave-guard";
 import { useSchemeSave, type SaveState } from "./use-scheme-save";
+
+// What the editor shows only on demand (other tabs, dialogs, revisions) is loaded when first opened:
+// the charts, forms and file list are not parsed and run while a large scheme loads.
+const ScalesView = dynamic(() => import("@/components/drawing/scales-view").then((m) => m.ScalesView));
+const ChestsView = dynamic(() => import("./chests-view").then((m) => m.ChestsView));
+const AccessoriesEditor = dynamic(() => import("./accessories-editor").then((m) => m.AccessoriesEditor));
+const WorksEditor = dynamic(() => import("./works-editor").then((m) => m.WorksEditor));
+const RevisionsPanel = dynamic(() => import("./revisions-panel").then((m) => m.RevisionsPanel));
+const StopForm = dynamic(() => import("./stop-form").then((m) => m.StopForm));
+const DivisionForm = dynamic(() => import("./division-form").then((m) => m.DivisionForm));
+const StopDetails = dynamic(() => import("./stop-details").then((m) => m.StopDetails));
+const StopFiles = dynamic(() => import("@/components/files/stop-files").then((m) => m.StopFiles));
 
 type Editing =
   | { kind: "stop"; divisionId: string; stopId?: string; newId: string }
