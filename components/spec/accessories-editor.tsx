@@ -6,13 +6,11 @@ import { accessoriesSchema } from "@/lib/estimate/scheme";
 import type { SchemeDocument } from "@/lib/spec/document";
 import { newId } from "./doc-ops";
 import { couplerName, workLabels } from "./format";
+import { FieldError } from "@/components/ui/field-error";
 
 type AccIn = z.input<typeof accessoriesSchema>;
 type AccOut = z.output<typeof accessoriesSchema>;
 
-function Err({ e }: { e?: { message?: string } }) {
-  return e?.message ? <p className="field-error"><span aria-hidden="true">✕ </span>{e.message}</p> : null;
-}
 
 export function AccessoriesEditor({ doc, editable, onApply }: { doc: SchemeDocument; editable: boolean; onApply: (acc: AccOut) => void }) {
   const form = useForm<AccIn, unknown, AccOut>({ resolver: zodResolver(accessoriesSchema), defaultValues: doc.accessories });
@@ -64,7 +62,7 @@ export function AccessoriesEditor({ doc, editable, onApply }: { doc: SchemeDocum
                 <p className="col-span-4 -mt-1 font-serif text-sm text-ink-soft">
                   {values?.[i] ? couplerName({ from: values[i].from, to: values[i].to, octave: (Number(values[i].octave ?? 0) as -1 | 0 | 1) }, divisions) : ""}
                 </p>
-                <div className="col-span-4"><Err e={err.couplers?.[i]?.from} /><Err e={err.couplers?.[i]?.to} /></div>
+                <div className="col-span-4"><FieldError error={err.couplers?.[i]?.from} /><FieldError error={err.couplers?.[i]?.to} /></div>
               </li>
             ))}
           </ul>
@@ -126,17 +124,17 @@ export function AccessoriesEditor({ doc, editable, onApply }: { doc: SchemeDocum
           <div>
             <label className="label" htmlFor="acc-levels">Memory levels</label>
             <input id="acc-levels" type="number" min={0} className="field num" aria-invalid={!!err.combination?.memoryLevels} {...register("combination.memoryLevels", { valueAsNumber: true })} />
-            <Err e={err.combination?.memoryLevels} />
+            <FieldError error={err.combination?.memoryLevels} />
           </div>
           <div>
             <label className="label" htmlFor="acc-general">General pistons</label>
             <input id="acc-general" type="number" min={0} className="field num" aria-invalid={!!err.combination?.generalPistons} {...register("combination.generalPistons", { valueAsNumber: true })} />
-            <Err e={err.combination?.generalPistons} />
+            <FieldError error={err.combination?.generalPistons} />
           </div>
           <div>
             <label className="label" htmlFor="acc-divisional">Divisional pistons (each)</label>
             <input id="acc-divisional" type="number" min={0} className="field num" aria-invalid={!!err.combination?.divisionalPistons} {...register("combination.divisionalPistons", { valueAsNumber: true })} />
-            <Err e={err.combination?.divisionalPistons} />
+            <FieldError error={err.combination?.divisionalPistons} />
           </div>
         </section>
       </fieldset>

@@ -3,7 +3,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useMemo, useState } from "react";
 import { set, useForm, useWatch, type FieldErrors, type Resolver } from "react-hook-form";
 import type { z } from "zod";
-import { FieldError as Err, FieldWarning } from "@/components/ui/field-error";
+import { FieldError, FieldWarning } from "@/components/ui/field-error";
 import { StateMark } from "@/components/ui/state-mark";
 import { actions, chestTypes, divisionSchema } from "@/lib/estimate/scheme";
 import type { DocDivision, SchemeDocument } from "@/lib/spec/document";
@@ -100,7 +100,7 @@ export function DivisionForm({
         <div>
           <label className="label" htmlFor="div-name">Name</label>
           <input id="div-name" className="field" placeholder="Great, Swell, Choir, Positive, Pedal…" aria-invalid={!!err.name} {...register("name")} />
-          <Err error={err.name} />
+          <FieldError error={err.name} />
         </div>
         <div>
           <label className="label" htmlFor="div-keyboard">Played from</label>
@@ -127,17 +127,17 @@ export function DivisionForm({
         <div>
           <label className="label" htmlFor="div-low">Compass from</label>
           <input id="div-low" className="field num" aria-invalid={!!(err.compass?.low || err.compass?.message)} aria-describedby="div-compass-error" {...register("compass.low")} />
-          <Err error={err.compass?.low} />
+          <FieldError error={err.compass?.low} />
         </div>
         <div>
           <label className="label" htmlFor="div-high">to</label>
           <input id="div-high" className="field num" aria-invalid={!!(err.compass?.high || err.compass?.message)} aria-describedby="div-compass-error div-compass-warning" {...register("compass.high")} />
-          <Err error={err.compass?.high} />
+          <FieldError error={err.compass?.high} />
         </div>
         <div>
           <label className="label" htmlFor="div-wind">Wind pressure</label>
           <input id="div-wind" type="number" step="any" className="field num" aria-invalid={!!err.windPressure?.value} aria-describedby="div-wind-warning" {...register("windPressure.value", { valueAsNumber: true })} />
-          <Err error={err.windPressure?.value} />
+          <FieldError error={err.windPressure?.value} />
         </div>
         <div>
           <label className="label" htmlFor="div-wind-unit">Unit</label>
@@ -147,7 +147,7 @@ export function DivisionForm({
           </select>
         </div>
       </div>
-      <Err id="div-compass-error" error={err.compass?.message ? err.compass : undefined} />
+      <FieldError id="div-compass-error" error={err.compass?.message ? err.compass : undefined} />
       {!err.windPressure?.value && <FieldWarning id="div-wind-warning" message={warningOf("windPressure.value")} />}
       {!err.compass && <FieldWarning id="div-compass-warning" message={warningOf("compass.high")} />}
       <p className="text-xs text-tin">Helmholtz names: manuals usually C to c′′′′ (c&apos;&apos;&apos;&apos;, 61 notes), pedals C to g′ (32) or f′ (30).</p>
@@ -180,7 +180,7 @@ export function DivisionForm({
         <div>
           <label className="label" htmlFor="div-distance">Cable run to console (m)</label>
           <input id="div-distance" type="number" step="0.5" min={0} className="field num" aria-invalid={!!err.consoleDistanceM} {...register("consoleDistanceM", { valueAsNumber: true })} />
-          <Err error={err.consoleDistanceM} />
+          <FieldError error={err.consoleDistanceM} />
         </div>
       </div>
       <div className="flex flex-wrap gap-4 text-sm">
@@ -208,17 +208,17 @@ export function DivisionForm({
           <div>
             <label className="label" htmlFor="div-box-width">Swell box inside width in mm</label>
             <input id="div-box-width" type="number" min={1} className="field num" defaultValue={initial?.swellBox?.widthMm} aria-invalid={!!err.swellBox?.widthMm} {...register("swellBox.widthMm", { valueAsNumber: true })} />
-            <Err error={err.swellBox?.widthMm} />
+            <FieldError error={err.swellBox?.widthMm} />
           </div>
           <div>
             <label className="label" htmlFor="div-box-depth">inside depth in mm</label>
             <input id="div-box-depth" type="number" min={1} className="field num" defaultValue={initial?.swellBox?.depthMm} aria-invalid={!!err.swellBox?.depthMm} {...register("swellBox.depthMm", { valueAsNumber: true })} />
-            <Err error={err.swellBox?.depthMm} />
+            <FieldError error={err.swellBox?.depthMm} />
           </div>
           <div>
             <label className="label" htmlFor="div-box-height">inside height in mm</label>
             <input id="div-box-height" type="number" min={1} className="field num" defaultValue={initial?.swellBox?.heightMm} aria-invalid={!!err.swellBox?.heightMm} {...register("swellBox.heightMm", { valueAsNumber: true })} />
-            <Err error={err.swellBox?.heightMm} />
+            <FieldError error={err.swellBox?.heightMm} />
           </div>
         </div>
       )}
@@ -227,12 +227,12 @@ export function DivisionForm({
           <div>
             <label className="label" htmlFor="div-space-length">Space for the chest, length (mm)</label>
             <input id="div-space-length" type="number" min={1} className="field num" defaultValue={initial?.space?.lengthMm} aria-invalid={!!err.space?.lengthMm} {...register("space.lengthMm", { valueAsNumber: true })} />
-            <Err error={err.space?.lengthMm} />
+            <FieldError error={err.space?.lengthMm} />
           </div>
           <div>
             <label className="label" htmlFor="div-space-depth">depth (mm)</label>
             <input id="div-space-depth" type="number" min={1} className="field num" defaultValue={initial?.space?.depthMm} aria-invalid={!!err.space?.depthMm} {...register("space.depthMm", { valueAsNumber: true })} />
-            <Err error={err.space?.depthMm} />
+            <FieldError error={err.space?.depthMm} />
           </div>
         </div>
       )}

@@ -9,6 +9,7 @@ import {
   constructionLabels, familyLabels, findingLabels, isValidFootage, materialLabels, originLabels, pipeWorkLabels, pitchText, resonatorLengthLabels,
 } from "./format";
 import { stopPresets, type StopFields } from "./presets";
+import { FieldError } from "@/components/ui/field-error";
 
 type StopIn = z.input<typeof stopFormSchema>;
 type StopOut = z.output<typeof stopFormSchema>;
@@ -16,9 +17,6 @@ type StopOut = z.output<typeof stopFormSchema>;
 const FOOTAGE_HINT = "Not a footage: write a whole number of feet or a fraction, e.g. 8, 2 2/3 (or 2⅔), 1 3/5.";
 const SILENT = "–";
 
-function Err({ e }: { e?: { message?: string } }) {
-  return e?.message ? <p className="field-error"><span aria-hidden="true">✕ </span>{e.message}</p> : null;
-}
 
 /** A comma-separated list of footages for one break of a mixture: "2, 1 1/3, 1"; a dash for a rank silent there. */
 function FootageList({ value, onChange, id, invalid }: { value: unknown; onChange: (v: (string | null)[]) => void; id: string; invalid: boolean }) {
@@ -134,17 +132,17 @@ export function StopForm({
         <div>
           <label className="label" htmlFor="stop-name">Name</label>
           <input id="stop-name" className="field" aria-invalid={!!err.name} {...register("name")} />
-          <Err e={err.name} />
+          <FieldError error={err.name} />
         </div>
         <div>
           <label className="label" htmlFor="stop-footage">Pitch (ft)</label>
           <input id="stop-footage" className="field num" aria-invalid={!!err.footage} aria-describedby="stop-footage-hint" {...register("footage")} />
-          <Err e={err.footage} />
+          <FieldError error={err.footage} />
         </div>
         <div>
           <label className="label" htmlFor="stop-ranks">Ranks</label>
           <input id="stop-ranks" type="number" min={1} max={12} className="field num" aria-invalid={!!err.ranks} {...register("ranks", { valueAsNumber: true })} />
-          <Err e={err.ranks} />
+          <FieldError error={err.ranks} />
         </div>
       </div>
       <p id="stop-footage-hint" className="-mt-2 text-xs text-tin">
@@ -156,7 +154,7 @@ export function StopForm({
           <select id="stop-family" className="field" {...register("family")}>
             {families.map((f) => <option key={f} value={f}>{familyLabels[f]}</option>)}
           </select>
-          <Err e={err.family} />
+          <FieldError error={err.family} />
         </div>
         <div>
           <label className="label" htmlFor="stop-construction">Construction</label>
@@ -188,7 +186,7 @@ export function StopForm({
                 <option value="">— choose a stop —</option>
                 {sources.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
               </select>
-              <Err e={err.source} />
+              <FieldError error={err.source} />
             </div>
           )}
           {origin === "extension" && (
@@ -216,7 +214,7 @@ export function StopForm({
               <div className="w-48">
                 <label className="label" htmlFor="stop-rescale">Pipes move (semitones)</label>
                 <input id="stop-rescale" type="number" step="1" min={-12} max={12} className="field num" aria-invalid={!!err.rescaleHt} {...register("rescaleHt", { valueAsNumber: true })} />
-                <Err e={err.rescaleHt} />
+                <FieldError error={err.rescaleHt} />
               </div>
             )}
             {works.includes("restored") && (
@@ -262,7 +260,7 @@ export function StopForm({
             <div>
               <label className="label" htmlFor="stop-flues-from">Flue trebles from</label>
               <input id="stop-flues-from" className="field num" placeholder="e.g. c'''" aria-invalid={!!err.fluesFrom} {...register("fluesFrom", { setValueAs: optionalText })} />
-              <Err e={err.fluesFrom} />
+              <FieldError error={err.fluesFrom} />
             </div>
           </div>
         </fieldset>
@@ -274,27 +272,27 @@ export function StopForm({
           <div>
             <label className="label" htmlFor="stop-deviation">Deviation</label>
             <input id="stop-deviation" type="number" step="any" className="field num" aria-invalid={!!err.scale?.deviationHt} {...register("scale.deviationHt", { valueAsNumber: true })} />
-            <Err e={err.scale?.deviationHt} />
+            <FieldError error={err.scale?.deviationHt} />
           </div>
           <div>
             <label className="label" htmlFor="stop-halving">Halves on note</label>
             <input id="stop-halving" type="number" step="1" className="field num" aria-invalid={!!err.scale?.halvingOn} {...register("scale.halvingOn", { valueAsNumber: true })} />
-            <Err e={err.scale?.halvingOn} />
+            <FieldError error={err.scale?.halvingOn} />
           </div>
           <div>
             <label className="label" htmlFor="stop-mouth">Mouth width</label>
             <input id="stop-mouth" type="number" step="0.01" className="field num" aria-invalid={!!err.scale?.mouthWidth} {...register("scale.mouthWidth", { valueAsNumber: true })} />
-            <Err e={err.scale?.mouthWidth} />
+            <FieldError error={err.scale?.mouthWidth} />
           </div>
           <div>
             <label className="label" htmlFor="stop-cutup">Cut-up</label>
             <input id="stop-cutup" type="number" step="0.01" placeholder="usual" className="field num" aria-invalid={!!err.scale?.cutUp} {...register("scale.cutUp", { setValueAs: optionalNumber })} />
-            <Err e={err.scale?.cutUp} />
+            <FieldError error={err.scale?.cutUp} />
           </div>
           <div>
             <label className="label" htmlFor="stop-offsetbass">Basses offset</label>
             <input id="stop-offsetbass" type="number" min={0} max={32} className="field num" aria-invalid={!!err.offsetBassPipes} {...register("offsetBassPipes", { valueAsNumber: true })} />
-            <Err e={err.offsetBassPipes} />
+            <FieldError error={err.offsetBassPipes} />
           </div>
         </div>
         <p className="mt-1 text-xs text-tin">
@@ -322,7 +320,7 @@ export function StopForm({
           <div>
             <label className="label" htmlFor="stop-bass-notes">Lowest notes</label>
             <input id="stop-bass-notes" type="number" min={1} max={61} className="field num" defaultValue={initial?.bass?.notes ?? 12} aria-invalid={!!err.bass?.notes} {...register("bass.notes", { valueAsNumber: true })} />
-            <Err e={err.bass?.notes} />
+            <FieldError error={err.bass?.notes} />
           </div>
           <div>
             <label className="label" htmlFor="stop-bass-material">of</label>
@@ -346,12 +344,12 @@ export function StopForm({
           <div>
             <label className="label" htmlFor="stop-low">Lowest note</label>
             <input id="stop-low" className="field num" defaultValue={initial?.compass?.low ?? "c"} aria-invalid={!!err.compass?.low} {...register("compass.low")} />
-            <Err e={err.compass?.low} />
+            <FieldError error={err.compass?.low} />
           </div>
           <div>
             <label className="label" htmlFor="stop-high">Highest note</label>
             <input id="stop-high" className="field num" defaultValue={initial?.compass?.high ?? "c''''"} aria-invalid={!!err.compass?.high} {...register("compass.high")} />
-            <Err e={err.compass?.high} />
+            <FieldError error={err.compass?.high} />
           </div>
         </div>
       )}
@@ -364,7 +362,7 @@ export function StopForm({
                 <div>
                   <label className="sr-only" htmlFor={`break-from-${i}`}>Break {i + 1} from note</label>
                   <input id={`break-from-${i}`} className="field num" placeholder="c'" aria-invalid={!!err.breaks?.[i]?.from} {...register(`breaks.${i}.from`)} />
-                  <Err e={err.breaks?.[i]?.from} />
+                  <FieldError error={err.breaks?.[i]?.from} />
                 </div>
                 <div>
                   <label className="sr-only" htmlFor={`break-footages-${i}`}>Break {i + 1} footages, comma-separated</label>
@@ -373,7 +371,7 @@ export function StopForm({
                     name={`breaks.${i}.footages`}
                     render={({ field }) => <FootageList id={`break-footages-${i}`} value={field.value} onChange={field.onChange} invalid={!!err.breaks?.[i]?.footages} />}
                   />
-                  <Err e={err.breaks?.[i]?.footages} />
+                  <FieldError error={err.breaks?.[i]?.footages} />
                 </div>
                 <button type="button" className="btn py-1" aria-label={`Remove break ${i + 1}`} onClick={() => breaks.remove(i)}>Remove</button>
               </div>

@@ -5,15 +5,13 @@ import { z } from "zod";
 import { caseSchema, siteSchema, windSchema } from "@/lib/estimate/scheme";
 import type { SchemeDocument } from "@/lib/spec/document";
 import { materialLabels, workLabels } from "./format";
+import { FieldError } from "@/components/ui/field-error";
 
 /** The organ's work beyond its divisions, edited together: the case and its front, the wind system, the site. */
 const worksSchema = z.object({ case: caseSchema, wind: windSchema, site: siteSchema });
 type WorksIn = z.input<typeof worksSchema>;
 export type Works = z.output<typeof worksSchema>;
 
-function Err({ e }: { e?: { message?: string } }) {
-  return e?.message ? <p className="field-error"><span aria-hidden="true">✕ </span>{e.message}</p> : null;
-}
 
 const optionalNumber = (v: unknown) => (v === "" || v === null || v === undefined ? undefined : Number(v));
 const lodging = (v: unknown) => (v === "yes" ? true : v === "no" ? false : undefined);
@@ -47,17 +45,17 @@ export function WorksEditor({ doc, editable, onApply }: { doc: SchemeDocument; e
           <div>
             <label className="label" htmlFor="case-width">Width (mm)</label>
             <input id="case-width" type="number" min={1} placeholder="from the chests" className="field num" aria-invalid={!!err.case?.widthMm} {...num("case.widthMm")} />
-            <Err e={err.case?.widthMm} />
+            <FieldError error={err.case?.widthMm} />
           </div>
           <div>
             <label className="label" htmlFor="case-depth">Depth (mm)</label>
             <input id="case-depth" type="number" min={1} placeholder="from the chests" className="field num" aria-invalid={!!err.case?.depthMm} {...num("case.depthMm")} />
-            <Err e={err.case?.depthMm} />
+            <FieldError error={err.case?.depthMm} />
           </div>
           <div>
             <label className="label" htmlFor="case-height">Height (mm)</label>
             <input id="case-height" type="number" min={1} placeholder="from the pipes" className="field num" aria-invalid={!!err.case?.heightMm} {...num("case.heightMm")} />
-            <Err e={err.case?.heightMm} />
+            <FieldError error={err.case?.heightMm} />
           </div>
           <div>
             <label className="label" htmlFor="case-timber">Timber</label>
@@ -68,17 +66,17 @@ export function WorksEditor({ doc, editable, onApply }: { doc: SchemeDocument; e
           <div>
             <label className="label" htmlFor="case-front">Speaking front pipes</label>
             <input id="case-front" type="number" min={0} className="field num" aria-invalid={!!err.case?.speakingFrontPipes} {...register("case.speakingFrontPipes", { valueAsNumber: true })} />
-            <Err e={err.case?.speakingFrontPipes} />
+            <FieldError error={err.case?.speakingFrontPipes} />
           </div>
           <div>
             <label className="label" htmlFor="case-dummies">Dummy front pipes</label>
             <input id="case-dummies" type="number" min={0} className="field num" aria-invalid={!!err.case?.dummyPipes} {...register("case.dummyPipes", { valueAsNumber: true })} />
-            <Err e={err.case?.dummyPipes} />
+            <FieldError error={err.case?.dummyPipes} />
           </div>
           <div>
             <label className="label" htmlFor="case-dummy-length">their length (mm)</label>
             <input id="case-dummy-length" type="number" min={100} className="field num" aria-invalid={!!err.case?.dummyPipeLengthMm} {...register("case.dummyPipeLengthMm", { valueAsNumber: true })} />
-            <Err e={err.case?.dummyPipeLengthMm} />
+            <FieldError error={err.case?.dummyPipeLengthMm} />
           </div>
           <div>
             <label className="label" htmlFor="case-metal">Front metal</label>
@@ -89,12 +87,12 @@ export function WorksEditor({ doc, editable, onApply }: { doc: SchemeDocument; e
           <div>
             <label className="label" htmlFor="case-decoration">Carved decoration (m²)</label>
             <input id="case-decoration" type="number" min={0} step="any" className="field num" aria-invalid={!!err.case?.decorationM2} {...register("case.decorationM2", { valueAsNumber: true })} />
-            <Err e={err.case?.decorationM2} />
+            <FieldError error={err.case?.decorationM2} />
           </div>
           <div>
             <label className="label" htmlFor="case-gilding">Gilding (m²)</label>
             <input id="case-gilding" type="number" min={0} step="any" className="field num" aria-invalid={!!err.case?.gildingM2} {...register("case.gildingM2", { valueAsNumber: true })} />
-            <Err e={err.case?.gildingM2} />
+            <FieldError error={err.case?.gildingM2} />
           </div>
           <p className="text-xs text-tin sm:col-span-4">Sizes left blank are worked out round the chests and the tallest pipe. Casework is priced by its surface: front, sides and roof.</p>
         </section>
@@ -117,7 +115,7 @@ export function WorksEditor({ doc, editable, onApply }: { doc: SchemeDocument; e
           <div>
             <label className="label" htmlFor="wind-trunk">Main trunk (m)</label>
             <input id="wind-trunk" type="number" min={0} step="any" placeholder="per division" className="field num" aria-invalid={!!err.wind?.trunkLengthM} {...num("wind.trunkLengthM")} />
-            <Err e={err.wind?.trunkLengthM} />
+            <FieldError error={err.wind?.trunkLengthM} />
           </div>
         </section>
 
@@ -126,7 +124,7 @@ export function WorksEditor({ doc, editable, onApply }: { doc: SchemeDocument; e
           <div>
             <label className="label" htmlFor="site-distance">Distance from the workshop (km)</label>
             <input id="site-distance" type="number" min={0} step="any" className="field num" aria-invalid={!!err.site?.distanceKm} {...register("site.distanceKm", { valueAsNumber: true })} />
-            <Err e={err.site?.distanceKm} />
+            <FieldError error={err.site?.distanceKm} />
           </div>
           <div>
             <label className="label" htmlFor="site-lodging">Crew lodging</label>

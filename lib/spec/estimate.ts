@@ -2,8 +2,9 @@
  * The estimate of a saved scheme document under its project's tuning: the one call the server and
  * the editor's live figures share. Pure.
  */
-import { describeIssue, estimateScheme, geometryRules, planScheme, schemeSchema, type Estimate, type GeometryRules, type Rates, type Scheme } from "@/lib/estimate";
+import { estimateScheme, geometryRules, planScheme, schemeSchema, type Estimate, type GeometryRules, type Rates, type Scheme } from "@/lib/estimate";
 import { toEstimatorScheme, type SchemeDocument, type Tuning } from "./document";
+import { describeDocumentIssue } from "./validate";
 
 export type DocumentEstimate = { ok: true; estimate: Estimate; scheme: Scheme } | { ok: false; messages: readonly string[] };
 
@@ -13,7 +14,7 @@ export function estimateDocument(doc: SchemeDocument, tuning: Tuning, rates: Rat
   // stage): the live figures plan a scheme once per edit, not twice. This never throws.
   const input = toEstimatorScheme(doc, tuning);
   const parsed = schemeSchema.safeParse(input);
-  if (!parsed.success) return { ok: false, messages: parsed.error.issues.map((i) => describeIssue(i.path, i.message, input)) };
+  if (!parsed.success) return { ok: false, messages: parsed.error.issues.map((i) => describeDocumentIssue(i, input)) };
   const plan = planScheme(parsed.data);
   if (plan.messages.length) return { ok: false, messages: [...plan.messages] };
   return { ok: true, estimate: estimateScheme(parsed.data, rates, plan), scheme: parsed.data };

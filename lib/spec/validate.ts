@@ -6,6 +6,7 @@
  */
 import { describeIssue, planScheme, schemeSchema } from "@/lib/estimate";
 import { where } from "@/lib/estimate/pipes";
+import { fieldLabel } from "@/lib/validation/labels";
 import { schemeDocumentSchema, toEstimatorScheme, type DocDivision, type DocStop, type SchemeDocument } from "./document";
 
 export type DocumentIssues = Record<string, string[]>;
@@ -27,6 +28,22 @@ function namesOnly(raw: unknown): unknown {
   };
 }
 
+/** The division (and stop) a path lies in: ["divisions", 0, "stops", 2, "ranks"] → ["divisions", 0, "stops", 2]. */
+function placeOf(path: readonly PropertyKey[]): PropertyKey[] {
+  if (path[0] !== "divisions" || typeof path[1] !== "number") return [];
+  return path[2] === "stops" && typeof path[3] === "number" ? path.slice(0, 4) : path.slice(0, 2);
+}
+
+function namingField(issue: { path: readonly PropertyKey[]; message: string }): string {
+  const label = fieldLabel(issue.path);
+  return !label || issue.message.startsWith(`${label}: `) ? issue.message : `${label}: ${issue.message}`;
+}
+
+/** One zod issue of a scheme-shaped input, worded: `Division "Great", stop "Principal": Ranks: at least 1`. */
+export function describeDocumentIssue(issue: { path: readonly PropertyKey[]; message: string }, raw: unknown): string {
+  return describeIssue(placeOf(issue.path), namingField(issue), raw);
+}
+
 function add(out: DocumentIssues, key: string, message: string) {
   (out[key || "_"] ??= []).push(message);
 }
@@ -37,7 +54,9 @@ export function checkDocument(raw: unknown, prefix = ""): DocumentCheck {
   const parsed = schemeDocumentSchema.safeParse(raw);
   if (!parsed.success) {
     const names = namesOnly(raw);
-    for (const issue of parsed.error.issues) add(out, prefix + issue.path.join("."), describeIssue(issue.path, issue.message, names));
+    // The place says which division and stop, the message which field ("Ranks: at least 1"); a
+    // schema's own message that does not name its field gets the field's label in front.
+    for (const issue of parsed.error.issues) add(out, prefix + issue.path.join("."), describeDocumentIssue(issue, names));
     return { ok: false, fields: out };
   }
   if (parsed.data.divisions.length) {

@@ -151,6 +151,6 @@ describe("scheme file", () => {
     const doc = structuredClone(docs[0]![1]);
     (doc.divisions[0]!.stops[1] as { footage: string }).footage = "2.67";
     const bad = readSchemeFile(JSON.stringify(toSchemeFile(doc, tuning)), { tuning });
-    expect(!bad.ok && bad.problems.map((p) => p.message)).toEqual([expect.stringMatching(/^Division "Great", stop "Clarabella": footage: "2\.67" is not a footage/)]);
+    expect(!bad.ok && bad.problems.map((p) => p.message)).toEqual([expect.stringMatching(/^Division "Great", stop "Clarabella": Pitch: "2\.67" is not a footage/)]);
   });
 });

@@ -29,7 +29,7 @@ describe("checkDocument", () => {
     doc.divisions![0]!.stops![2]!.footage = "3";
     const res = checkDocument(doc);
     expect(res.ok).toBe(false);
-    if (!res.ok) expect(res.fields["divisions.0.stops.2.footage"]![0]).toMatch(/^Division "Great", stop "Twelfth": footage: "3" is not a footage/);
+    if (!res.ok) expect(res.fields["divisions.0.stops.2.footage"]![0]).toMatch(/^Division "Great", stop "Twelfth": Pitch: "3" is not a footage/);
   });
 
   it("words shape errors the same way before any consistency check", () => {
@@ -37,7 +37,7 @@ describe("checkDocument", () => {
     (doc.divisions![0]!.stops![0] as { ranks: number }).ranks = 0;
     const res = checkDocument(doc);
     expect(res.ok).toBe(false);
-    if (!res.ok) expect(res.fields["divisions.0.stops.0.ranks"]![0]).toMatch(/^Division "Great", stop "Open Diapason": ranks: /);
+    if (!res.ok) expect(res.fields["divisions.0.stops.0.ranks"]![0]).toMatch(/^Division "Great", stop "Open Diapason": Ranks: at least 1$/);
   });
 });
 

@@ -2,13 +2,11 @@
 import type { FieldErrors, UseFormRegister } from "react-hook-form";
 import type { z } from "zod";
 import { projectStatusLabels, projectStatuses, type projectInputSchema } from "@/lib/spec/projects";
+import { FieldError } from "@/components/ui/field-error";
 
 export type ProjectFormValues = z.input<typeof projectInputSchema>;
 export const projectFieldNames = ["name", "clientName", "venue", "location", "instrument", "status", "targetDate", "pitchHz", "temperatureC", "notes"] as const;
 
-function Err({ e }: { e?: { message?: string } }) {
-  return e?.message ? <p className="field-error"><span aria-hidden="true">✕ </span>{e.message}</p> : null;
-}
 
 /** The project's fields, shared by the new-project form and the details form. */
 export function ProjectFields({
@@ -32,28 +30,28 @@ export function ProjectFields({
         <div>
           <label className="label" htmlFor={id("name")}>Project name</label>
           <input id={id("name")} className="field" aria-invalid={!!errors.name} {...register("name")} />
-          <Err e={errors.name} />
+          <FieldError error={errors.name} />
         </div>
         <div>
           <label className="label" htmlFor={id("clientName")}>Client</label>
           <input id={id("clientName")} className="field" placeholder="Church, school, hall…" aria-invalid={!!errors.clientName} {...register("clientName")} />
-          <Err e={errors.clientName} />
+          <FieldError error={errors.clientName} />
         </div>
         <div>
           <label className="label" htmlFor={id("venue")}>Venue</label>
           <input id={id("venue")} className="field" {...register("venue")} />
-          <Err e={errors.venue} />
+          <FieldError error={errors.venue} />
         </div>
         <div>
           <label className="label" htmlFor={id("location")}>Location</label>
           <input id={id("location")} className="field" {...register("location")} />
-          <Err e={errors.location} />
+          <FieldError error={errors.location} />
         </div>
       </div>
       <div>
         <label className="label" htmlFor={id("instrument")}>Instrument</label>
         <input id={id("instrument")} className="field" placeholder="e.g. two manuals and pedal, 1890s, rebuilt once" {...register("instrument")} />
-        <Err e={errors.instrument} />
+        <FieldError error={errors.instrument} />
       </div>
       <div className={compact ? "grid grid-cols-2 gap-3" : "grid gap-3 sm:grid-cols-4"}>
         <div>
@@ -61,7 +59,7 @@ export function ProjectFields({
           <select id={id("status")} className="field" {...register("status")}>
             {projectStatuses.map((s) => <option key={s} value={s}>{projectStatusLabels[s]}</option>)}
           </select>
-          <Err e={errors.status} />
+          <FieldError error={errors.status} />
         </div>
         <div>
           <label className="label" htmlFor={id("targetDate")}>Target completion</label>
@@ -72,23 +70,23 @@ export function ProjectFields({
             aria-invalid={!!errors.targetDate}
             {...register("targetDate", { setValueAs: (v: unknown) => (v === "" || v == null ? null : v) })}
           />
-          <Err e={errors.targetDate} />
+          <FieldError error={errors.targetDate} />
         </div>
         <div>
           <label className="label" htmlFor={id("pitchHz")}>Pitch a′ (Hz)</label>
           <input id={id("pitchHz")} type="number" step="0.1" className="field num" aria-invalid={!!errors.pitchHz} {...register("pitchHz", { valueAsNumber: true })} />
-          <Err e={errors.pitchHz} />
+          <FieldError error={errors.pitchHz} />
         </div>
         <div>
           <label className="label" htmlFor={id("temperatureC")}>Design temp. (°C)</label>
           <input id={id("temperatureC")} type="number" step="0.5" className="field num" aria-invalid={!!errors.temperatureC} {...register("temperatureC", { valueAsNumber: true })} />
-          <Err e={errors.temperatureC} />
+          <FieldError error={errors.temperatureC} />
         </div>
       </div>
       <div>
         <label className="label" htmlFor={id("notes")}>Notes</label>
         <textarea id={id("notes")} rows={compact ? 2 : 3} className="field" {...register("notes")} />
-        <Err e={errors.notes} />
+        <FieldError error={errors.notes} />
       </div>
     </fieldset>
   );

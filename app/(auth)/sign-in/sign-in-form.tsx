@@ -6,6 +6,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { signInErrors, signInSchema } from "@/lib/validation/users";
+import { FieldError } from "@/components/ui/field-error";
 
 type Values = z.input<typeof signInSchema>;
 
@@ -31,12 +32,12 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
       <div>
         <label className="label" htmlFor="email">E-mail</label>
         <input id="email" type="email" autoComplete="username" className="field" {...register("email")} />
-        {formState.errors.email && <p className="field-error">{formState.errors.email.message}</p>}
+        <FieldError error={formState.errors.email} />
       </div>
       <div>
         <label className="label" htmlFor="password">Password</label>
         <input id="password" type="password" autoComplete="current-password" className="field" {...register("password")} />
-        {formState.errors.password && <p className="field-error">{formState.errors.password.message}</p>}
+        <FieldError error={formState.errors.password} />
       </div>
       {error && (
         <p role="alert" data-testid="sign-in-error" className="rounded border border-clash/40 bg-clash-light px-3 py-2 text-sm text-clash">

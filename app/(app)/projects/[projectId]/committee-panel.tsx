@@ -10,6 +10,7 @@ import { ConfirmButton } from "@/components/ui/confirm";
 import { useInvitations, useInvite, useRemoveCommitteeMember, useResendInvitation, useWithdrawInvitation } from "@/lib/query/hooks";
 import { inviteSchema, type InvitationState } from "@/lib/spec/committee";
 import type { ProjectMember } from "@/lib/spec/projects";
+import { FieldError } from "@/components/ui/field-error";
 
 const stateWords: Record<InvitationState, string> = { pending: "◷ Waiting", expired: "⌛ Expired", accepted: "✓ Accepted", withdrawn: "✕ Withdrawn" };
 
@@ -37,12 +38,12 @@ function InviteForm({ projectId, onDone }: { projectId: string; onDone: (text: s
         <div>
           <label className="label" htmlFor="invite-name">Name</label>
           <input id="invite-name" className="field" aria-invalid={!!err.name} {...form.register("name")} placeholder="e.g. Canon Ada Example" />
-          {err.name && <p className="field-error">✕ {err.name.message}</p>}
+          <FieldError error={err.name} />
         </div>
         <div>
           <label className="label" htmlFor="invite-email">E-mail</label>
           <input id="invite-email" type="email" className="field" aria-invalid={!!err.email} {...form.register("email")} placeholder="name@parish.example" />
-          {err.email && <p className="field-error">✕ {err.email.message}</p>}
+          <FieldError error={err.email} />
         </div>
       </div>
       <button type="submit" className="btn-primary" disabled={invite.isPending}>{invite.isPending ? "Sending…" : "Send invitation"}</button>

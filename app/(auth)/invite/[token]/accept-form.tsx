@@ -8,6 +8,7 @@ import type { z } from "zod";
 import { api, ApiError, errorText } from "@/components/spec/api";
 import { applyServerErrors } from "@/components/ui/server-errors";
 import { acceptInvitationSchema } from "@/lib/spec/committee";
+import { FieldError } from "@/components/ui/field-error";
 
 type Values = z.input<typeof acceptInvitationSchema>;
 
@@ -40,17 +41,17 @@ export function AcceptForm({ token, email, name }: { token: string; email: strin
       <div>
         <label className="label" htmlFor="accept-name">Your name as others see it</label>
         <input id="accept-name" className="field" aria-invalid={!!err.name} {...form.register("name")} />
-        {err.name && <p className="field-error">✕ {err.name.message}</p>}
+        <FieldError error={err.name} />
       </div>
       <div>
         <label className="label" htmlFor="accept-password">Password (at least 10 characters)</label>
         <input id="accept-password" type="password" className="field" autoComplete="new-password" aria-invalid={!!err.password} {...form.register("password")} />
-        {err.password && <p className="field-error">✕ {err.password.message}</p>}
+        <FieldError error={err.password} />
       </div>
       <div>
         <label className="label" htmlFor="accept-confirm">The same password again</label>
         <input id="accept-confirm" type="password" className="field" autoComplete="new-password" aria-invalid={!!err.confirm} {...form.register("confirm")} />
-        {err.confirm && <p className="field-error">✕ {err.confirm.message}</p>}
+        <FieldError error={err.confirm} />
       </div>
       {accept.error && !(accept.error instanceof ApiError && accept.error.fields) && <p role="alert" className="field-error">✕ {errorText(accept.error, "The invitation could not be accepted.")}</p>}
       <button type="submit" className="btn-primary w-full" disabled={accept.isPending}>{accept.isPending ? "Setting up…" : "Set my password and sign in"}</button>
