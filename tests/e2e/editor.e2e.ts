@@ -323,9 +323,10 @@ test.describe("read-only roles", () => {
     const schemes = page.getByTestId("schemes-table");
     await expect(schemes.getByTestId("scheme-Shared scheme")).toBeVisible();
     await expect(schemes.getByTestId("scheme-Unshared scheme")).toHaveCount(0);
-    // The committee sees who is on the project, by name only.
-    await expect(page.getByTestId("people")).toContainText("Test client");
-    await expect(page.getByTestId("people")).not.toContainText("@");
+    // The committee sees who is on the project, by name (and the firm's people by role), no e-mails.
+    await expect(page.getByTestId("committee-people")).toContainText("Test client");
+    await expect(page.getByTestId("firm-people")).toContainText("Tonal director");
+    for (const list of ["committee-people", "firm-people"]) await expect(page.getByTestId(list)).not.toContainText(/@|·/);
 
     await schemes.getByRole("link", { name: "Shared scheme" }).click();
     await expect(page).toHaveURL(new RegExp(`${schemePath(projectId, schemeId)}$`));

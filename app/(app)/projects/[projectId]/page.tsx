@@ -11,6 +11,8 @@ import { mayReadQuotation } from "@/lib/quote/access";
 import { can } from "@/lib/roles";
 import { AppError } from "@/lib/server/errors";
 import { requirePageUser } from "@/lib/server/guard";
+import { getFirm } from "@/db/queries/firm";
+import { CommitteeProjectView } from "./committee-project-view";
 import { ProjectView } from "./project-view";
 import { QuotationsPanel } from "./quotations-panel";
 
@@ -44,19 +46,33 @@ export default async function ProjectPage({ params }: { params: Promise<{ projec
     abilities.readPreferences && prefetch(keys.projects.preferences(projectId), () => summarisePreferences({ user, projectId })),
     abilities.isClient && prefetch(keys.projects.ownPreference(projectId), () => getOwnPreference({ user, projectId })),
   ]);
+  const quotationsPanel = (
+    <QuotationsPanel
+      projectId={projectId}
+      initial={quotations}
+      schemes={data.schemes.map((s) => ({ id: s.id, name: s.name }))}
+      rateSets={rateSets.map((r) => ({ id: r.id, name: r.name, isCurrent: r.isCurrent }))}
+      mayIssue={mayIssue && !data.project.archived}
+      mayRead={mayReadQuotation(user.role)}
+      role={user.role}
+    />
+  );
+  if (abilities.isClient) {
+    // The firm's public contact details, as on a tender's cover; nothing else of the firm's row.
+    const firm = await getFirm();
+    return (
+      <Hydrate>
+        <CommitteeProjectView projectId={projectId} selfId={user.id} firm={{ name: firm.name, email: firm.email, phone: firm.phone, website: firm.website }} tenders={quotations}>
+          {quotationsPanel}
+        </CommitteeProjectView>
+      </Hydrate>
+    );
+  }
   return (
     <Hydrate>
       <div className="space-y-6">
         <ProjectView projectId={projectId} can={abilities} />
-        <QuotationsPanel
-          projectId={projectId}
-          initial={quotations}
-          schemes={data.schemes.map((s) => ({ id: s.id, name: s.name }))}
-          rateSets={rateSets.map((r) => ({ id: r.id, name: r.name, isCurrent: r.isCurrent }))}
-          mayIssue={mayIssue && !data.project.archived}
-          mayRead={mayReadQuotation(user.role)}
-          role={user.role}
-        />
+        {quotationsPanel}
       </div>
     </Hydrate>
   );

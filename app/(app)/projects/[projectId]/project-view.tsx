@@ -6,7 +6,7 @@ import { projectStatusLabels } from "@/lib/spec/projects";
 import { ArchiveButton } from "./archive-button";
 import { CommitteePanel } from "./committee-panel";
 import { MembersPanel } from "./members-panel";
-import { MyPreference, PreferenceSummaryPanel } from "./preferences";
+import { PreferenceSummaryPanel } from "./preferences";
 import { ProjectDetailsForm } from "./project-details-form";
 import { ProjectDetailsText } from "./project-details-text";
 import { ProjectLinks } from "./project-links";
@@ -24,7 +24,7 @@ export type ProjectAbilities = {
   readPreferences: boolean;
 };
 
-/** A project's page, from the project read the server prefetched (and that mutations refresh). */
+/** A project's page for the firm (a committee member has CommitteeProjectView), from the project read the server prefetched (and that mutations refresh). */
 export function ProjectView({ projectId, can }: { projectId: string; can: ProjectAbilities }) {
   const { data } = useProject(projectId);
   if (!data) return null;
@@ -52,26 +52,16 @@ export function ProjectView({ projectId, can }: { projectId: string; can: Projec
       <ProjectLinks projectId={project.id} role={can.role} />
       <div className="grid gap-6 xl:grid-cols-[1fr_26rem]">
         <div className="min-w-0 space-y-6">
-          <SchemesList projectId={project.id} schemes={schemes} mayEdit={can.editSchemes} clientView={can.isClient} />
-          {can.isClient && schemes.length > 0 && <MyPreference projectId={project.id} schemes={schemes} />}
+          <SchemesList projectId={project.id} schemes={schemes} mayEdit={can.editSchemes} clientView={false} />
           {can.readPreferences && <PreferenceSummaryPanel projectId={project.id} />}
-          {!can.isClient && (
-            <section className="panel p-4">
-              <h2 className="mb-3 text-xl font-semibold">Details</h2>
-              {can.editProject ? <ProjectDetailsForm project={project} readOnly={false} /> : <ProjectDetailsText project={project} mayChangeStatus={can.setStatus && !project.archived} />}
-            </section>
-          )}
+          <section className="panel p-4">
+            <h2 className="mb-3 text-xl font-semibold">Details</h2>
+            {can.editProject ? <ProjectDetailsForm project={project} readOnly={false} /> : <ProjectDetailsText project={project} mayChangeStatus={can.setStatus && !project.archived} />}
+          </section>
         </div>
         <div className="space-y-6">
           {can.manageCommittee && <CommitteePanel projectId={project.id} members={project.members} />}
-          {can.isClient ? (
-            <section className="panel p-4 text-sm" aria-labelledby="people-heading">
-              <h2 id="people-heading" className="mb-2 text-xl font-semibold">People on this project</h2>
-              <ul className="space-y-1" data-testid="people">{project.members.map((m) => <li key={m.id}>{m.name}{m.id === can.selfId && <span className="text-xs text-tin"> (you)</span>}</li>)}</ul>
-            </section>
-          ) : (
-            <MembersPanel projectId={project.id} members={firm} mayEdit={can.editProject} selfId={can.selfId} />
-          )}
+          <MembersPanel projectId={project.id} members={firm} mayEdit={can.editProject} selfId={can.selfId} />
         </div>
       </div>
     </div>
