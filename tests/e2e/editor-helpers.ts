@@ -37,7 +37,7 @@ export async function whenInteractive(page: Page) {
           const hydrated = (el: Element) => Object.keys(el).some((k) => k.startsWith("__reactProps"));
           const signOut = [...document.querySelectorAll("button")].find((b) => b.textContent?.trim() === "Sign out");
           if (!signOut || !hydrated(signOut)) return false;
-          if (document.querySelector("[data-skeleton]")) return false;
+          if (document.querySelector('[data-skeleton], [data-testid="page-loading"]')) return false;
           return [...document.querySelectorAll("main button, main a[href], main input, main select, main textarea")].every(hydrated);
         }),
       { message: "the page is hydrated" },

@@ -12,9 +12,9 @@ import { can } from "@/lib/roles";
 import { AppError } from "@/lib/server/errors";
 import { requirePageUser } from "@/lib/server/guard";
 import { getFirm } from "@/db/queries/firm";
-import { CommitteeProjectView } from "./committee-project-view";
-import { ProjectView } from "./project-view";
-import { QuotationsPanel } from "./quotations-panel";
+import { CommitteeProjectView } from "../committee-project-view";
+import { ProjectView } from "../project-view";
+import { QuotationsPanel } from "../quotations-panel";
 
 export const metadata: Metadata = { title: "Project" };
 

@@ -4,8 +4,8 @@ import { keys } from "@/lib/query/keys";
 import { Hydrate, prefetch } from "@/lib/query/server";
 import { can } from "@/lib/roles";
 import { requirePageUser } from "@/lib/server/guard";
-import { NewProjectForm } from "./new-project-form";
-import { ProjectsTable } from "./projects-table";
+import { NewProjectForm } from "../new-project-form";
+import { ProjectsTable } from "../projects-table";
 
 export const metadata: Metadata = { title: "Projects" };
 

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { listRateSets } from "@/db/queries/rate-sets";
 import { formatDate } from "@/components/spec/format";
 import { requirePageUser } from "@/lib/server/guard";
-import { NewRateSetForm } from "./new-rate-set-form";
+import { NewRateSetForm } from "../new-rate-set-form";
 
 export const metadata: Metadata = { title: "Rate book" };
 
