@@ -25,19 +25,18 @@ export async function openAs(page: Page, user: Pick<TestUser, "email" | "passwor
 
 /**
  * Waits until React has hydrated the page (its handlers are on the elements), so a click is not
- * lost on server-rendered markup. A page with a loading skeleton streams: the header hydrates
- * first and the page's own part later, so this waits for the skeleton to be gone and for every
- * control in the page's main part to be hydrated too.
+ * lost on server-rendered markup.
  */
 export async function whenInteractive(page: Page) {
+  // The layout (with Sign out) hydrates before a page that streams in behind its loading skeleton:
+  // wait for the skeleton to go and for every control in the page itself to be hydrated too.
   await expect
     .poll(
       () =>
         page.evaluate(() => {
           const hydrated = (el: Element) => Object.keys(el).some((k) => k.startsWith("__reactProps"));
           const signOut = [...document.querySelectorAll("button")].find((b) => b.textContent?.trim() === "Sign out");
-          if (!signOut || !hydrated(signOut)) return false;
-          if (document.querySelector('[data-skeleton], [data-testid="page-loading"]')) return false;
+          if (!signOut || !hydrated(signOut) || document.querySelector('[data-testid="page-loading"]')) return false;
           return [...document.querySelectorAll("main button, main a[href], main input, main select, main textarea")].every(hydrated);
         }),
       { message: "the page is hydrated" },

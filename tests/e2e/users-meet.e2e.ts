@@ -4,8 +4,8 @@
 // phone width (390 × 844, a common phone's viewport in CSS pixels).
 import { expect, test, type Page } from "@playwright/test";
 import { restoreScheme } from "@/db/demo-scenario";
-import { api, makeUser } from "../support/server";
-import { openAs, projectWithScheme, schemePath, uid } from "./editor-helpers";
+import { api, makeUser, signIn } from "../support/server";
+import { openAs, projectWithScheme, schemePath, uid, whenInteractive } from "./editor-helpers";
 
 test("the division form says a reversed compass in place and asks before keeping 5000 mm of wind", async ({ page }) => {
   test.setTimeout(60_000);
@@ -112,6 +112,34 @@ test("at 390 px no page scrolls sideways, for each role", async ({ browser }) =>
       await expect(page.getByTestId("user-name")).toBeAttached();
       await expect(page.getByRole("button", { name: "Sign out" }), `${role} ${path}: Sign out within reach`).toBeInViewport();
       expect(await sideways(page), `${role} ${path} scrolls sideways`).toBeLessThanOrEqual(0);
+    }
+    await ctx.close();
+  }
+});
+
+test("at 390 px the quotation, survey files, import and rate-set pages fit the screen", async ({ browser }) => {
+  test.setTimeout(120_000);
+  const designer = await makeUser("designer");
+  const estimator = await makeUser("estimator");
+  const { cookie, projectId, schemeId } = await projectWithScheme(designer, restoreScheme, `Phone pages ${uid()}`);
+  expect((await api(`/api/projects/${projectId}/members`, { method: "POST", cookie, body: { email: estimator.email } })).status).toBe(200);
+  const ec = await signIn(estimator);
+  const set = (await api("/api/rate-sets", { method: "POST", cookie: ec, body: { name: `Phone rates ${uid()}` } })).json.rateSet;
+  const quotation = await api(`/api/projects/${projectId}/quotations`, { method: "POST", cookie: ec, body: { schemeId, rateSetId: set.id } });
+  expect(quotation.status).toBe(201);
+  const pages: [typeof designer, string[]][] = [
+    [designer, [`/projects/${projectId}/files`, `/projects/${projectId}/import`]],
+    [estimator, [`/projects/${projectId}/quotations/${quotation.json.quotation.id}`, "/rates", `/rates/${set.id}`]],
+  ];
+  for (const [user, paths] of pages) {
+    const ctx = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const page = await ctx.newPage();
+    await openAs(page, user, paths[0]!);
+    for (const path of paths) {
+      if (path !== paths[0]) await page.goto(path);
+      await whenInteractive(page);
+      await expect(page.getByRole("button", { name: "Sign out" }), `${path}: Sign out within reach`).toBeInViewport();
+      expect(await sideways(page), `${path} scrolls sideways`).toBeLessThanOrEqual(0);
     }
     await ctx.close();
   }

@@ -64,7 +64,7 @@ describe("the committee's project page", () => {
     p = await page(`/projects/${project.id}`, cc);
     const until = new Date(issued.validUntil).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
     expect(p.part("next-now")).toContain(`has sent you tender ${issued.number} for Scheme A, valid until ${until}.`);
-    expect(p.part("next-steps")).toMatch(/reply to the e-mail it came with/);
+    expect(decode(p.html)).toMatch(/To accept it or to ask for changes, reply to the e-mail it came with/);
 
     // The firm's own page of the same project is unchanged for the firm.
     const firmView = await page(`/projects/${project.id}`, dc);

@@ -116,6 +116,9 @@ describe("schemes API", () => {
     expect(Object.keys(res.json.error.fields)).toEqual(expect.arrayContaining(["document.divisions.0.stops.1.ranks", "document.divisions.1.compass.high"]));
     expect(messages.some((m) => m.startsWith('Division "Great", stop "Principal"'))).toBe(true);
     expect(messages.some((m) => m.startsWith('Division "Pedal"'))).toBe(true);
+    // In the product's words, naming the field: never zod's own.
+    expect(res.json.error.fields["document.divisions.0.stops.1.ranks"]).toEqual(['Division "Great", stop "Principal": Ranks: at least 1']);
+    expect(messages.join(" ")).not.toMatch(/expected|received|Invalid input|Too small|Too big/);
 
     const refs = structuredClone(scheme.document);
     refs.divisions[1].stops[1].source = "no-such-stop";

@@ -83,7 +83,7 @@ function Section({ node, depth, register, errors, currency }: { node: Group; dep
       {leaves.length > 0 && (
         <div className="grid gap-x-6 gap-y-2 sm:grid-cols-2">
           {leaves.map((f) => (
-            <label key={f.key} className={`grid items-start gap-2 text-sm ${f.kind === "text" && f.key !== "currency" ? "grid-cols-[1fr_22rem] sm:col-span-2" : "grid-cols-[1fr_12rem]"}`} htmlFor={`rate-${f.key.replace(/[^A-Za-z0-9]/g, "-")}`}>
+            <label key={f.key} className={`grid items-start gap-2 text-sm ${f.kind === "text" && f.key !== "currency" ? "grid-cols-1 sm:col-span-2 sm:grid-cols-[1fr_22rem]" : "grid-cols-[1fr_minmax(0,12rem)]"}`} htmlFor={`rate-${f.key.replace(/[^A-Za-z0-9]/g, "-")}`}>
               <span className="pt-1.5" title={f.description}>{f.label}</span>
               <Input f={f} register={register} errors={errors} currency={currency} label={[...f.groupLabels, f.label].join(" — ")} />
             </label>
