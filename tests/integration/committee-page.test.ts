@@ -16,7 +16,7 @@ async function page(path: string, cookie: string) {
   const html = (await res.text()).replace(/<script[\s\S]*?<\/script>/g, "");
   const part = (testId: string) => {
     const m = new RegExp(`data-testid="${testId}"[^>]*>([\\s\\S]*?)</(ul|section|p)>`).exec(html);
-    return m ? decode(m[1]!.replace(/<!-- -->/g, "").replace(/<[^>]+>/g, " ").replace(/\s+/g, " ").trim()) : null;
+    return m ? decode(m[1]!.replace(/<!-- -->/g, "").replace(/<[^<>]*>/g, " ").replace(/\s+/g, " ").trim()) : null;
   };
   return { status: res.status, html, part };
 }
