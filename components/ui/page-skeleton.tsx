@@ -66,7 +66,7 @@ export function PageSkeleton({ what, blocks, aside = false }: { what: string; bl
         <Bar className="h-4 w-56 max-w-full" />
       </div>
       {aside ? (
-        <div className="grid gap-6 xl:grid-cols-[1fr_26rem]">
+        <div className="grid grid-cols-1 gap-6 xl:grid-cols-[1fr_26rem]">
           <div className="min-w-0 space-y-6">{main}</div>
           <div className="space-y-6"><Panel lines={3} /><Panel lines={2} /></div>
         </div>

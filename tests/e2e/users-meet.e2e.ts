@@ -5,7 +5,7 @@
 import { expect, test, type Page } from "@playwright/test";
 import { restoreScheme } from "@/db/demo-scenario";
 import { api, makeUser, signIn } from "../support/server";
-import { openAs, projectWithScheme, schemePath, uid, whenInteractive } from "./editor-helpers";
+import { addScheme, openAs, projectWithScheme, schemePath, uid, whenInteractive } from "./editor-helpers";
 
 test("the division form says a reversed compass in place and asks before keeping 5000 mm of wind", async ({ page }) => {
   test.setTimeout(60_000);
@@ -117,18 +117,20 @@ test("at 390 px no page scrolls sideways, for each role", async ({ browser }) =>
   }
 });
 
-test("at 390 px the quotation, survey files, import and rate-set pages fit the screen", async ({ browser }) => {
+test("at 390 px the project page with two schemes, the quotation, survey files, import and rate-set pages fit the screen", async ({ browser }) => {
   test.setTimeout(120_000);
   const designer = await makeUser("designer");
   const estimator = await makeUser("estimator");
   const { cookie, projectId, schemeId } = await projectWithScheme(designer, restoreScheme, `Phone pages ${uid()}`);
+  // Two schemes: the project page then offers Compare beside its heading.
+  await addScheme(cookie, projectId, { ...restoreScheme, name: "Second scheme" });
   expect((await api(`/api/projects/${projectId}/members`, { method: "POST", cookie, body: { email: estimator.email } })).status).toBe(200);
   const ec = await signIn(estimator);
   const set = (await api("/api/rate-sets", { method: "POST", cookie: ec, body: { name: `Phone rates ${uid()}` } })).json.rateSet;
   const quotation = await api(`/api/projects/${projectId}/quotations`, { method: "POST", cookie: ec, body: { schemeId, rateSetId: set.id } });
   expect(quotation.status).toBe(201);
   const pages: [typeof designer, string[]][] = [
-    [designer, [`/projects/${projectId}/files`, `/projects/${projectId}/import`]],
+    [designer, [`/projects/${projectId}`, `/projects/${projectId}/files`, `/projects/${projectId}/import`]],
     [estimator, [`/projects/${projectId}/quotations/${quotation.json.quotation.id}`, "/rates", `/rates/${set.id}`]],
   ];
   for (const [user, paths] of pages) {

@@ -56,7 +56,7 @@ export function CommitteeProjectView({ projectId, selfId, firm, tenders: initial
         </ol>
       </section>
 
-      <div className="grid gap-6 xl:grid-cols-[1fr_22rem]">
+      <div className="grid grid-cols-1 gap-6 xl:grid-cols-[1fr_22rem]">
         <div className="min-w-0 space-y-6">
           {schemes.length > 0 ? (
             <SchemesList projectId={project.id} schemes={schemes} mayEdit={false} clientView />

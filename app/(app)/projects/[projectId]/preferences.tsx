@@ -23,7 +23,7 @@ export function PreferenceSummaryPanel({ projectId }: { projectId: string }) {
               <li key={s.schemeId} className="flex items-center gap-2" data-testid={`preference-count-${s.schemeName}`}>
                 <span className="flex-1">{s.schemeName}</span>
                 <span className="num font-semibold">{s.count}</span>
-                <span aria-hidden="true" className="inline-block h-2 rounded bg-brass" style={{ width: `${Math.max(2, s.count * 24)}px` }} />
+                {s.count > 0 && <span aria-hidden="true" className="inline-block h-2 rounded bg-brass" style={{ width: `${s.count * 24}px` }} />}
               </li>
             ))}
           </ul>

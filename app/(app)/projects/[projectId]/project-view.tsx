@@ -50,7 +50,7 @@ export function ProjectView({ projectId, can }: { projectId: string; can: Projec
         {can.editProject && <ArchiveButton projectId={project.id} projectName={project.name} archived={project.archived} />}
       </div>
       <ProjectLinks projectId={project.id} role={can.role} />
-      <div className="grid gap-6 xl:grid-cols-[1fr_26rem]">
+      <div className="grid grid-cols-1 gap-6 xl:grid-cols-[1fr_26rem]">
         <div className="min-w-0 space-y-6">
           <SchemesList projectId={project.id} schemes={schemes} mayEdit={can.editSchemes} clientView={false} />
           {can.readPreferences && <PreferenceSummaryPanel projectId={project.id} />}
@@ -59,7 +59,7 @@ export function ProjectView({ projectId, can }: { projectId: string; can: Projec
             {can.editProject ? <ProjectDetailsForm project={project} readOnly={false} /> : <ProjectDetailsText project={project} mayChangeStatus={can.setStatus && !project.archived} />}
           </section>
         </div>
-        <div className="space-y-6">
+        <div className="min-w-0 space-y-6">
           {can.manageCommittee && <CommitteePanel projectId={project.id} members={project.members} />}
           <MembersPanel projectId={project.id} members={firm} mayEdit={can.editProject} selfId={can.selfId} />
         </div>

@@ -74,13 +74,13 @@ export function QuotationsPanel({ projectId, initial, schemes, rateSets, mayIssu
             <tbody>
               {data.map((q) => (
                 <tr key={q.id} className="border-t border-tin-rule" data-testid={`quotation-${q.number}`}>
-                  <td className="px-4 py-2 num font-medium">
+                  <td className="whitespace-nowrap px-4 py-2 num font-medium">
                     {mayRead ? <Link href={`/projects/${projectId}/quotations/${q.id}`} className="underline decoration-tin-rule underline-offset-2 hover:decoration-brass">{q.number}</Link> : q.number}
                   </td>
-                  <td className="px-4 py-2">{q.schemeName} <span className="text-xs text-tin">v{q.schemeVersion}</span></td>
+                  <td className="min-w-[9rem] px-4 py-2">{q.schemeName} <span className="text-xs text-tin">v{q.schemeVersion}</span></td>
                   <td className="px-4 py-2"><QuoteStatusBadge status={q.status} />{mayRead && q.sentAt && <span className="ml-2 text-xs text-tin">sent {formatDate(q.sentAt)}</span>}</td>
-                  {(mayRead || role === "client") && <td className="px-4 py-2 text-right num" data-testid="quotation-total">{q.totalAmount ? `${currencySymbol(q.currency)}${formatAmount(q.totalAmount)}` : "–"}</td>}
-                  <td className="px-4 py-2 num">{formatDate(q.validUntil)}</td>
+                  {(mayRead || role === "client") && <td className="whitespace-nowrap px-4 py-2 text-right num" data-testid="quotation-total">{q.totalAmount ? `${currencySymbol(q.currency)}${formatAmount(q.totalAmount)}` : "–"}</td>}
+                  <td className="whitespace-nowrap px-4 py-2 num">{formatDate(q.validUntil)}</td>
                   <td className="whitespace-nowrap px-4 py-2 text-right">
                     {(mayRead || role === "client") && <a className="btn py-1 text-xs" href={`/api/quotations/${q.id}/documents/tender`}>Tender (.docx)</a>}
                     {role === "workshop" && <a className="btn py-1 text-xs" href={`/api/quotations/${q.id}/documents/work-list`}>Work list (.docx)</a>}
