@@ -35,7 +35,8 @@ export const restoreScheme: SchemeDocumentInput = {
   divisions: [
     {
       id: "gt", name: "Great", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 89, unit: "mm" },
-      consoleDistanceM: 6, space: { lengthMm: 6200, depthMm: 1450 }, chestWork: "restored",
+      // The clear height is measured from the chest to the case roof (invented, like every figure here).
+      consoleDistanceM: 6, space: { lengthMm: 6200, depthMm: 1450, heightMm: 3200 }, chestWork: "restored",
       stops: [
         stop("gt-od", "Open Diapason", "8", "principal", { ...restored, ...surveyed("gt-od"), condition: ["feet-collapsing", "split-seams"], scale: { deviationHt: 2 }, offsetBassPipes: 12, bass: { notes: 7, material: "zinc" } }),
         stop("gt-cl", "Clarabella", "8", "flute", { ...restored, condition: ["wood-split"], construction: "open", material: "pine", bass: { notes: 12, material: "pine", construction: "stopped" } }),
@@ -48,7 +49,7 @@ export const restoreScheme: SchemeDocumentInput = {
     },
     {
       id: "sw", name: "Swell", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 95, unit: "mm" },
-      enclosed: true, swellBox: { widthMm: 5900, depthMm: 1900, heightMm: 3400 }, consoleDistanceM: 9, space: { lengthMm: 5800, depthMm: 1650 }, chestWork: "restored",
+      enclosed: true, swellBox: { widthMm: 5900, depthMm: 1900, heightMm: 3400 }, consoleDistanceM: 9, space: { lengthMm: 5800, depthMm: 1650, heightMm: 2950 }, chestWork: "restored",
       stops: [
         stop("sw-ob", "Open Diapason", "8", "principal", { ...restored, offsetBassPipes: 12, bass: { notes: 12, material: "pine", construction: "stopped" } }),
         stop("sw-lg", "Lieblich Gedackt", "8", "flute", { ...restored, condition: ["woodworm"], construction: "stopped", material: "pine" }),
@@ -65,7 +66,7 @@ export const restoreScheme: SchemeDocumentInput = {
     },
     {
       id: "ped", name: "Pedal", ...pedal, action: "electro-pneumatic", chest: "pitman", chestLayout: "chromatic",
-      windPressure: { value: 100, unit: "mm" }, consoleDistanceM: 12, space: { lengthMm: 7800, depthMm: 1000 }, chestWork: "restored", passageBoard: false,
+      windPressure: { value: 100, unit: "mm" }, consoleDistanceM: 12, space: { lengthMm: 7800, depthMm: 1000, heightMm: 4500 }, chestWork: "restored", passageBoard: false,
       stops: [
         stop("ped-bd", "Bourdon", "16", "flute", { ...restored, ...surveyed("ped-bd"), condition: ["wood-split"], construction: "stopped", material: "pine" }),
         stop("ped-bf", "Bass Flute", "8", "flute", { origin: "extension", source: "ped-bd", addedPipes: "existing", work: ["restored"], construction: "stopped", material: "pine" }),
@@ -97,6 +98,9 @@ export const enlargeScheme: SchemeDocumentInput = {
   divisions: [
     {
       ...restoreScheme.divisions![0]!,
+      // The new Choir box stands over the back of the Great: 2 700 mm clear above its chest, so the
+      // Trumpet's bass resonators need mitring or another place, and the added rows cost depth.
+      space: { lengthMm: 6200, depthMm: 1450, heightMm: 2700 },
       stops: [
         ...restoreScheme.divisions![0]!.stops!.slice(0, 6),
         stop("gt-12", "Twelfth", "2 2/3", "mutation"),
@@ -112,7 +116,7 @@ export const enlargeScheme: SchemeDocumentInput = {
     restoreScheme.divisions![1]!,
     {
       id: "ch", name: "Choir", ...manual, action: "electro-pneumatic", chest: "slider", windPressure: { value: 75, unit: "mm" },
-      enclosed: true, consoleDistanceM: 8, space: { lengthMm: 5800, depthMm: 1350 },
+      enclosed: true, consoleDistanceM: 8, space: { lengthMm: 5800, depthMm: 1350, heightMm: 2800 },
       stops: [
         stop("ch-sd", "Stopped Diapason", "8", "flute", { construction: "stopped", material: "oak" }),
         stop("ch-dl", "Dulciana", "8", "string", { origin: "existing", work: ["relocated", "revoiced"], scale: { deviationHt: -4 } }),
@@ -124,7 +128,8 @@ export const enlargeScheme: SchemeDocumentInput = {
       ],
     },
     {
-      // The same Pedal space as scheme A: the new basses and the Trombone do not fit its depth.
+      // The same Pedal space as scheme A: the new basses and the Trombone do not fit its depth, and the
+      // Open Wood and Trombone basses stand taller than its 4 500 mm.
       ...restoreScheme.divisions![2]!,
       stops: [
         stop("ped-ow", "Open Wood", "16", "flute", { material: "pine", scale: { deviationHt: 4 }, offsetBassPipes: 0 }),

@@ -223,7 +223,7 @@ export function DivisionForm({
         </div>
       )}
       {spaceKnown && (
-        <div className="grid grid-cols-2 gap-3">
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
           <div>
             <label className="label" htmlFor="div-space-length">Space for the chest, length (mm)</label>
             <input id="div-space-length" type="number" min={1} className="field num" defaultValue={initial?.space?.lengthMm} aria-invalid={!!err.space?.lengthMm} {...register("space.lengthMm", { valueAsNumber: true })} />
@@ -233,6 +233,12 @@ export function DivisionForm({
             <label className="label" htmlFor="div-space-depth">depth (mm)</label>
             <input id="div-space-depth" type="number" min={1} className="field num" defaultValue={initial?.space?.depthMm} aria-invalid={!!err.space?.depthMm} {...register("space.depthMm", { valueAsNumber: true })} />
             <FieldError error={err.space?.depthMm} />
+          </div>
+          <div>
+            <label className="label" htmlFor="div-space-height">clear height above the chest (mm, optional)</label>
+            <input id="div-space-height" type="number" min={1} className="field num" defaultValue={initial?.space?.heightMm} aria-invalid={!!err.space?.heightMm}
+              {...register("space.heightMm", { setValueAs: (v: unknown) => (v === "" || v === null || v === undefined ? undefined : Number(v)) })} />
+            <Err error={err.space?.heightMm} />
           </div>
         </div>
       )}

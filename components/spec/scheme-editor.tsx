@@ -353,7 +353,7 @@ export function SchemeEditor({
                 />
               ))}
             {tab === "scales" && (
-              <ScalesView doc={doc} tuning={initialScheme.tuning} figures={figures} rules={drawingRulesOf(figureSource)} units={figureSource.kind === "live" ? figureSource.rates.drawingUnits : "mm"} editable={editable} projectId={projectId} schemeId={initialScheme.id} onChange={edit} />
+              <ScalesView doc={doc} tuning={initialScheme.tuning} figures={figures} rules={drawingRulesOf(figureSource)} units={drawingRulesOf(figureSource).drawingUnits} editable={editable} projectId={projectId} schemeId={initialScheme.id} onChange={edit} />
             )}
             {tab === "chests" && <ChestsView doc={doc} tuning={initialScheme.tuning} figures={figures} rates={drawingRulesOf(figureSource)} />}
             {tab === "accessories" && (

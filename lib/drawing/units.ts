@@ -37,3 +37,12 @@ export function lengthDecimals(units: DrawingUnits, mm: number): number {
 export function parseDrawingUnits(value: string | null | undefined, firmChoice: DrawingUnits): DrawingUnits {
   return value === "mm" || value === "in" ? value : firmChoice;
 }
+
+/** 1 ft³ = 0.3048³ m³ exactly (international foot, 1959; NIST SP 811, Appendix B). */
+export const M3_PER_CUBIC_FOOT = 0.3048 ** 3;
+
+/** A flow given in m³/min, in the firm's units: m³/min, or cubic feet per minute where it works in inches. */
+export function flowIn(units: DrawingUnits, m3PerMin: number): number {
+  return units === "mm" ? m3PerMin : m3PerMin / M3_PER_CUBIC_FOOT;
+}
+export const flowUnitLabel = (units: DrawingUnits) => (units === "mm" ? "m³/min" : "cfm");

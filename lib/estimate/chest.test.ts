@@ -4,7 +4,7 @@ import { chestFit, chestSideOf, chestSize, clearanceMm, pipeRowWidthMm, placeRow
 import { estimateScheme } from "./estimate";
 import { manual, scheme, stop } from "./test-support/schemes";
 
-const N = { clearanceMinMm: 10, clearanceFractionOfDiameter: 0.2, endBoardMm: 50, passageBoardMm: 300, heightMm: 700, kgPerM2: 140 };
+const N = { clearanceMinMm: 10, clearanceFractionOfDiameter: 0.2, endBoardMm: 50, passageBoardMm: 300, heightMm: 700, kgPerM2: 140, bassesAt: "ends" as const };
 const row = (c: number, cs: number, d: number): ChestRow => ({ cSideMm: c, cSharpSideMm: cs, largestFootprintMm: d, largestDiameterMm: d });
 
 describe("chest space", () => {
@@ -87,5 +87,26 @@ describe("one chest rule for the figures and the drawing", () => {
     expect(row.cSideMm).toBeCloseTo(236, 9);
     expect(row.cSharpSideMm).toBeCloseTo(212, 9);
     expect(chestSideOf(37, "chromatic")).toBe(0);
+  });
+
+  it("plants the basses in the centre when the firm does: each half from the middle outwards, the chest no longer", () => {
+    const C = { ...N, bassesAt: "centre" as const };
+    const pipes = [0, 1, 2, 3].map((k) => ({ footprintMm: 100 - k * 10, diameterMm: 100 - k * 10, channel: 36 + k }));
+    const size = chestSize([rowOf(pipes, "c-c-sharp", C)], "c-c-sharp", false, C);
+    // Halves 236 + 2·50 = 336 and 212 + 2·50 = 312 mm, the same as with basses at the ends.
+    expect(size.halvesMm).toEqual([336, 312]);
+    const xs = placeRow(pipes, size, C);
+    expect(xs[0]).toBeCloseTo(336 - 50 - 65, 9);
+    expect(xs[2]).toBeCloseTo(336 - 50 - 130 - 53, 9);
+    expect(xs[1]).toBeCloseTo(336 + 50 + 59, 9);
+    expect(xs[3]).toBeCloseTo(336 + 50 + 118 + 47, 9);
+    // Chromatic: the lowest pipe in the middle of the row, the next to its right, the third to its left.
+    const chrom = chestSize([rowOf(pipes, "chromatic", C)], "chromatic", false, C);
+    const cx = placeRow(pipes, chrom, C);
+    expect(cx[2]).toBeLessThan(cx[0]);
+    expect(cx[0]).toBeLessThan(cx[1]);
+    expect(cx[1]).toBeLessThan(cx[3]);
+    expect(cx[2] - 53).toBeCloseTo(50, 9);
+    expect(cx[3] + 47).toBeCloseTo(chrom.lengthMm - 50, 9);
   });
 });

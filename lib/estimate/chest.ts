@@ -81,23 +81,50 @@ export interface RowPipe {
 
 /**
  * Where the pipes of one row stand along a chest of `size` (x of each pipe's centre, mm from the
- * left end), lowest key first: chromatic left to right after the end board; on a C/C♯ chest the
- * C side rises from the left end toward the middle, the C♯ side from the right end.
+ * left end), given lowest key first, by the firm's `bassesAt`:
+ * - ends: chromatic left to right after the end board; on a C/C♯ chest the C side rises from the
+ *   left end toward the middle, the C♯ side from the right end;
+ * - centre: on a C/C♯ chest each half's basses stand at the middle, the treble outwards; a
+ *   chromatic row stands centred on the chest, its lowest pipe in the middle and the next ones
+ *   alternately right and left of it.
+ * The pipes take the same widths either way, so the row's length (and the chest's) does not change.
  */
 export function placeRow(pipes: readonly RowPipe[], size: ChestSize, n: ChestNorms): number[] {
-  const xs: number[] = [];
-  let left = n.endBoardMm;
-  let right = size.lengthMm - n.endBoardMm;
-  for (const p of pipes) {
+  const centre = n.bassesAt === "centre";
+  const xs: number[] = new Array(pipes.length);
+  if (size.layout === "chromatic" && centre) {
+    // Lowest in the middle: order …, 4, 2, 0, 1, 3, … (indices into pipes), laid left to right.
+    const order: number[] = [];
+    for (let i = 0; i < pipes.length; i++) {
+      if (i % 2 === 0) order.unshift(i);
+      else order.push(i);
+    }
+    let total = 0;
+    for (const p of pipes) total += pipeRowWidthMm(p.footprintMm, p.diameterMm, n);
+    let x = Math.max(n.endBoardMm, (size.lengthMm - total) / 2);
+    for (const i of order) {
+      const w = pipeRowWidthMm(pipes[i].footprintMm, pipes[i].diameterMm, n);
+      xs[i] = x + w / 2;
+      x += w;
+    }
+    return xs;
+  }
+  const split = size.halvesMm ? size.halvesMm[0] : size.lengthMm;
+  // Cursors and their direction for the C side (or the whole chromatic row) and the C♯ side.
+  let a = centre ? split - n.endBoardMm : n.endBoardMm;
+  const aDir = centre ? -1 : 1;
+  let b = centre ? split + n.endBoardMm : size.lengthMm - n.endBoardMm;
+  const bDir = centre ? 1 : -1;
+  pipes.forEach((p, i) => {
     const w = pipeRowWidthMm(p.footprintMm, p.diameterMm, n);
     if (chestSideOf(p.channel, size.layout) === 0) {
-      xs.push(left + w / 2);
-      left += w;
+      xs[i] = a + (aDir * w) / 2;
+      a += aDir * w;
     } else {
-      xs.push(right - w / 2);
-      right -= w;
+      xs[i] = b + (bDir * w) / 2;
+      b += bDir * w;
     }
-  }
+  });
   return xs;
 }
 

@@ -63,7 +63,7 @@ export const DEFAULT_RATES: Rates = {
     allowancePercent: 35,
   },
   cutUpByFamily: { principal: 0.25, flute: 0.33, string: 0.2, reed: 0.25, hybrid: 0.25, mutation: 0.25, mixture: 0.25 },
-  chest: { clearanceMinMm: 8, clearanceFractionOfDiameter: 0.15, endBoardMm: 60, passageBoardMm: 400, heightMm: 700, kgPerM2: 140 },
+  chest: { clearanceMinMm: 8, clearanceFractionOfDiameter: 0.15, endBoardMm: 60, passageBoardMm: 400, heightMm: 700, kgPerM2: 140, bassesAt: "ends" },
   wiring: { relayToChestM: 3, offsetChestRunM: 3, consoleInternalM: 2, conductorsPerStopControl: 2 },
   wind: {
     chordKeys: 10, chordKeysPedal: 2, windwayAt8ftCMm: 1.4, windwayExponent: 0.5, dischargeCoefficient: 0.65, reedFlowFactor: 1.5,

@@ -57,7 +57,7 @@ export interface StopEstimate {
 export interface DivisionChest {
   readonly main: ChestSize;
   readonly offset: ChestSize | null;
-  readonly space: { readonly lengthMm: number; readonly depthMm: number } | null;
+  readonly space: { readonly lengthMm: number; readonly depthMm: number; readonly heightMm?: number } | null;
   /** Null when no space is given. */
   readonly fit: ChestFit | null;
 }

@@ -32,7 +32,7 @@ export type GeometryRules = {
   readonly alloys: Rates["alloys"];
   readonly wind: WindRules;
 };
-type WindRules = Pick<Rates["wind"], "windwayAt8ftCMm" | "windwayExponent" | "dischargeCoefficient" | "reedFlowFactor" | "airDensityKgM3">;
+type WindRules = Pick<Rates["wind"], "windwayAt8ftCMm" | "windwayExponent" | "dischargeCoefficient" | "reedFlowFactor" | "airDensityKgM3" | "chordKeys" | "chordKeysPedal">;
 
 /** The geometry rules out of a firm's rates, and nothing else of them. */
 export function geometryRules(rates: Rates): GeometryRules {
@@ -51,6 +51,8 @@ export function geometryRules(rates: Rates): GeometryRules {
     wind: {
       windwayAt8ftCMm: w.windwayAt8ftCMm, windwayExponent: w.windwayExponent, dischargeCoefficient: w.dischargeCoefficient,
       reedFlowFactor: w.reedFlowFactor, airDensityKgM3: w.airDensityKgM3,
+      // The full-organ chord: the drawing board's wind per rank, as wind.ts reckons a division's.
+      chordKeys: w.chordKeys, chordKeysPedal: w.chordKeysPedal,
     },
   };
 }

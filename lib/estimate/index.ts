@@ -18,7 +18,7 @@ export { departments, departmentLabels, sizeClasses, sizeClassLabels, type Depar
 export { packages, packageLabels, type PackageId } from "./cost-centres";
 export { phases, type Programme } from "./programme";
 export type { Money, ItemLine, MaterialMoneyLine, LabourLine } from "./money";
-export { chestFit, chestSize, clearanceMm, placeRow, rowOf, rowDepthMm, chestSideOf, type ChestSize, type ChestFit, type ChestRow, type RowPipe } from "./chest";
+export { chestFit, chestSize, clearanceMm, pipeRowWidthMm, placeRow, rowOf, rowDepthMm, chestSideOf, type ChestSize, type ChestFit, type ChestRow, type RowPipe } from "./chest";
 export type { Wiring } from "./wiring";
 export type { WindNeed } from "./wind";
 export type { CaseFigures } from "./case";

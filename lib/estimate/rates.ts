@@ -211,6 +211,8 @@ export const ratesSchema = z.object({
     passageBoardMm: num({ title: "Passage board", unit: "mm" }),
     heightMm: num({ title: "Chest with its rackboards, under the pipe feet", unit: "mm" }),
     kgPerM2: num({ title: "Weight of a chest", unit: "kg/m²" }),
+    /** Where the largest pipes of a row stand: at the outer ends of the chest, or in its centre. */
+    bassesAt: z.enum(["ends", "centre"]).default("ends").meta({ title: "Largest pipes stand at", description: "ends: basses at the outer ends of the chest; centre: basses in the middle, the treble outwards." }),
   }),
   wiring: z.object({
     /** Direct-electric chests: relay in the organ, this far from the pipe magnets. */

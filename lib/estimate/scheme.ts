@@ -219,8 +219,12 @@ export const divisionSchema = z.object({
   swellBox: z.object({ widthMm: z.number().positive(), depthMm: z.number().positive(), heightMm: z.number().positive() }).optional(),
   /** Cable run from the console to this division's chests, in metres. */
   consoleDistanceM: z.number().min(0).max(500).default(10),
-  /** Chest space available in the case, in mm; absent means not yet known. */
-  space: z.object({ lengthMm: z.number().positive(), depthMm: z.number().positive() }).optional(),
+  /**
+   * Chest space available in the case, in mm; absent means not yet known. `heightMm`: clear height
+   * above the chest for the pipes to stand in (to the roof, a floor or the division above); absent
+   * means not measured. Older files have no height and read unchanged.
+   */
+  space: z.object({ lengthMm: z.number().positive(), depthMm: z.number().positive(), heightMm: z.number().positive().max(40000).optional() }).optional(),
   passageBoard: z.boolean().default(true),
   /** What happens to the windchests and action: made new, restored, or kept as they are. */
   chestWork: z.enum(workOnExisting).default("new"),

@@ -2,9 +2,10 @@
  * The estimate of a saved scheme document under its project's tuning: the one call the server and
  * the editor's live figures share. Pure.
  */
-import { estimateScheme, geometryRules, planScheme, schemeSchema, type Estimate, type GeometryRules, type Rates, type Scheme } from "@/lib/estimate";
+import { estimateScheme, geometryRules, planScheme, schemeSchema, type Estimate, type Rates, type Scheme } from "@/lib/estimate";
 import { toEstimatorScheme, type SchemeDocument, type Tuning } from "./document";
 import { describeDocumentIssue } from "./validate";
+import type { PlantingRules } from "@/lib/drawing/chest-planting";
 
 export type DocumentEstimate = { ok: true; estimate: Estimate; scheme: Scheme } | { ok: false; messages: readonly string[] };
 
@@ -20,10 +21,14 @@ export function estimateDocument(doc: SchemeDocument, tuning: Tuning, rates: Rat
   return { ok: true, estimate: estimateScheme(parsed.data, rates, plan), scheme: parsed.data };
 }
 
-/** The rules a chest drawing needs (clearances, sheet and board thickness, cut-up, alloys): no price, norm or crew among them. */
-export type DrawingRules = GeometryRules;
+/**
+ * The rules the drawings need (clearances, sheet and board thickness, cut-up, alloys, timber
+ * densities, the keys of the full-organ chord, the firm's units): no price, norm or crew among them.
+ * The firm's whole rates satisfy it too (the editor's live figures pass them as they are).
+ */
+export type DrawingRules = PlantingRules & { readonly drawingUnits: Rates["drawingUnits"] };
 export function drawingRules(rates: Rates): DrawingRules {
-  return geometryRules(rates);
+  return { ...geometryRules(rates), woodDensityKgM3: rates.woodDensityKgM3, drawingUnits: rates.drawingUnits };
 }
 
 /** An estimate as a reader without money:read holds it: no money lines, no direct costs, no word of the rates used. */
