@@ -19,6 +19,8 @@ import type { DocStop, SchemeDocument, Tuning } from "@/lib/spec/document";
 import { findStop, updateStop } from "@/components/spec/doc-ops";
 import { footageText, noteText } from "@/components/spec/format";
 import { useDrawingScheme } from "@/components/spec/drawing-scheme";
+import { chestWords, fitState } from "@/components/spec/chest-words";
+import { StateMark } from "@/components/ui/state-mark";
 import type { Figures } from "@/components/spec/use-figures";
 import { ScalingChartSvg, signedHt, type Overlay } from "./scaling-chart-svg";
 
@@ -81,6 +83,10 @@ export function ScalesView({
   const stop = scalable.find((s) => s.id === stopId) ?? scalable[0];
 
   const parsed = useDrawingScheme(doc, tuning, figures);
+  const chestFigures = figures?.ok ? figures.estimate.divisions.find((d) => d.id === division?.id) : undefined;
+  const chest = chestFigures && chestFigures.chest.main.rows > 0
+    ? { words: chestWords(chestFigures.chest.main, chestFigures.chest.space, chestFigures.chest.fit, units), state: fitState(chestFigures.chest.fit, true) }
+    : null;
   const chart = useMemo(() => {
     if (!parsed || !division) return null;
     if (!parsed.scheme.divisions.some((d) => d.id === division.id)) return null;
@@ -102,11 +108,18 @@ export function ScalesView({
       <div className="grid items-start gap-4 xl:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="panel min-w-0 p-3">
           <h3 className="mb-1 text-base font-semibold">Scales of the {division.name}</h3>
+          {chest && (
+            // The chest the scales make: a wider scale is a longer and deeper chest (the Chests tab draws it).
+            <p className={`mb-1 flex items-start gap-1.5 text-sm ${chest.state === "clash" ? "font-semibold text-clash" : chest.state === "fit" ? "text-fit" : "text-ink-soft"}`} data-testid="scales-chest-words" data-fits={chest.state}>
+              <StateMark kind={chest.state} className="mt-0.5 h-4 w-4" />
+              <span>{division.name} chest: {chest.words}</span>
+            </p>
+          )}
           <p className="mb-2 text-xs text-tin">
             Each rank&apos;s pipes as semitones wider (+) or narrower (−) than the normal scale (8′ C 155.5 mm, halving on the 17th note). A level line keeps the normal halving; a rising line widens towards the treble (a later halving), a falling one narrows.
           </p>
           {chart ? (
-            <ScalingChartSvg chart={chart} selected={stop?.id} overlay={stop ? surveyOverlay(stop) : null} />
+            <ScalingChartSvg chart={chart} selected={stop?.id} overlay={stop ? surveyOverlay(stop) : null} pipeTableHref={(id) => `/projects/${projectId}/schemes/${schemeId}/pipes?stop=${encodeURIComponent(id)}`} />
           ) : (
             figures ? (
               <p className="text-sm text-caution" role="status">The chart waits for the scheme to be complete: {figures.ok ? "" : figures.messages[0]}</p>

@@ -28,7 +28,16 @@ export function lineLabel(l: Pick<ScaleLine, "stopName" | "footageText" | "rank"
   return l.ranks > 1 ? `${l.stopName} ${romanNumeral(l.ranks)}, rank ${l.rank}` : `${l.stopName} ${footageText(l.footageText)}`;
 }
 
-export function ScalingChartSvg({ chart, selected, overlay, testId }: { chart: ScalingChart; selected?: string; overlay?: Overlay | null; testId?: string }) {
+export function ScalingChartSvg({
+  chart, selected, overlay, testId, pipeTableHref,
+}: {
+  chart: ScalingChart;
+  selected?: string;
+  overlay?: Overlay | null;
+  testId?: string;
+  /** Where a rank's pipe table opens: its name on the chart and in the legend link there. */
+  pipeTableHref?: (stopId: string) => string;
+}) {
   const width = 760;
   const height = 340;
   const margin = { top: 14, right: 150, bottom: 34, left: 44 };
@@ -72,11 +81,15 @@ export function ScalingChartSvg({ chart, selected, overlay, testId }: { chart: S
               </g>
             );
           })}
-          {ends.map(({ l, i, yEnd }) => (
-            <text key={`label-${l.stopId}:${l.rank}`} x={x(chart.highKey) + 34} y={yEnd} dy="0.32em" fontSize={10} fill={CHART_COLOURS[i % CHART_COLOURS.length]} fontWeight={selected === l.stopId ? 700 : 400}>
-              {lineLabel(l).length > 22 ? `${lineLabel(l).slice(0, 21)}…` : lineLabel(l)}
-            </text>
-          ))}
+          {ends.map(({ l, i, yEnd }) => {
+            const label = (
+              <text key={`label-${l.stopId}:${l.rank}`} x={x(chart.highKey) + 34} y={yEnd} dy="0.32em" fontSize={10} fill={CHART_COLOURS[i % CHART_COLOURS.length]} fontWeight={selected === l.stopId ? 700 : 400} textDecoration={pipeTableHref ? "underline" : undefined}>
+                {lineLabel(l).length > 22 ? `${lineLabel(l).slice(0, 21)}…` : lineLabel(l)}
+              </text>
+            );
+            // On the chart itself a rank's name opens its pipe table (the legend has the same link for the keyboard).
+            return pipeTableHref ? <a key={`link-${l.stopId}:${l.rank}`} href={pipeTableHref(l.stopId)} tabIndex={-1} aria-hidden="true">{label}</a> : label;
+          })}
           {fittedLine && (
             <LinePath data={fittedLine} x={(p) => x(p.k)} y={(p) => y(p.d)} stroke="#b0852f" strokeWidth={1.5} strokeDasharray="4 4" fill="none" />
           )}
@@ -95,7 +108,11 @@ export function ScalingChartSvg({ chart, selected, overlay, testId }: { chart: S
         {chart.lines.map((l, i) => (
           <li key={`${l.stopId}:${l.rank}`} className="flex items-center gap-1.5">
             <svg width="22" height="8" aria-hidden="true"><line x1="0" x2="22" y1="4" y2="4" stroke={CHART_COLOURS[i % CHART_COLOURS.length]} strokeWidth="2" strokeDasharray={DASHES[i % DASHES.length]} /></svg>
-            {lineLabel(l)}
+            {pipeTableHref && l.kind !== "extension" ? (
+              <a href={pipeTableHref(l.stopId)} className="underline decoration-tin-light underline-offset-2 hover:text-brass-dark" aria-label={`Pipe table of ${lineLabel(l)}`}>{lineLabel(l)}</a>
+            ) : (
+              lineLabel(l)
+            )}
             <span className="text-tin">
               {" "}
               {l.kind === "extension" ? "(its rank's scale)" : `${signedHt(l.scale.deviationHt)} ht, halving on ${l.scale.halvingOn}`}
