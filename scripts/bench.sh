@@ -16,6 +16,9 @@ echo "── estimator"
 mkdir -p .data/bench
 node_modules/.bin/esbuild scripts/bench.ts --bundle --platform=node --format=esm --target=node20 --outfile=.data/bench/bench.mjs --log-level=warning || exit 1
 node .data/bench/bench.mjs || exit 1
+echo "── drawing board"
+node_modules/.bin/esbuild scripts/bench-drawing.ts --bundle --platform=node --format=esm --target=node20 --outfile=.data/bench/bench-drawing.mjs --log-level=warning || exit 1
+node .data/bench/bench-drawing.mjs || exit 1
 
 echo "── server"
 export PG_TEST_PORT=${BENCH_PG_PORT:-54349} PG_TEST_NAME=pg-bench
