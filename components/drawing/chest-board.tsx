@@ -6,7 +6,7 @@
 import { StateMark } from "@/components/ui/state-mark";
 import { Caution } from "@/components/ui/caution";
 import { chestWords, lengthNumber } from "@/components/spec/chest-words";
-import { formatNumber } from "@/components/spec/format";
+import { formatNumber, noteText } from "@/components/spec/format";
 import { keysInWords, type DivisionPlanting, type PlantedChest } from "@/lib/drawing/chest-planting";
 import { flowIn, flowUnitLabel, lengthUnitLabel, weightIn, weightUnitLabel, type DrawingUnits } from "@/lib/drawing/units";
 import { ChestElevationSvg, ChestPlanSvg } from "./chest-planting-svg";
@@ -47,7 +47,7 @@ export function ChestBoard({
   const { elevation } = planting;
   const W = weightUnitLabel(units);
   const kg = (x: number) => formatNumber(weightIn(units, x), 0);
-  const flow = (x: number) => formatNumber(flowIn(units, x), units === "mm" ? 2 : 0);
+  const flow = (x: number) => (units === "mm" ? flowIn(units, x).toFixed(2) : formatNumber(flowIn(units, x), 0));
   const chests: [string, PlantedChest][] = [["Main chest", planting.main]];
   if (planting.offset) chests.push(["Offset chest", planting.offset]);
   const ranks = [...planting.main.rows, ...(planting.offset?.rows ?? [])].filter((r) => r.windM3PerMin > 0);
@@ -92,7 +92,7 @@ export function ChestBoard({
               <ul className="ml-6 list-disc">
                 {elevation.tooTall.map((t) => (
                   <li key={t.label} className="num">
-                    {t.label}: {keysInWords(t.keys)}, the tallest {lengthNumber(t.tallestMm, units)} {u}, {lengthNumber(t.overMm, units)} {u} over
+                    {t.label}: {keysInWords(t.keys.map(noteText))}, the tallest {lengthNumber(t.tallestMm, units)} {u}, {lengthNumber(t.overMm, units)} {u} over
                   </li>
                 ))}
               </ul>
@@ -108,20 +108,20 @@ export function ChestBoard({
             <thead>
               <tr className="text-left text-xs text-tin">
                 <th className="font-normal">{W}</th>
-                <th className="text-right font-normal">new pipes</th>
-                <th className="text-right font-normal">existing pipes</th>
-                <th className="text-right font-normal">chest</th>
-                <th className="text-right font-normal">total</th>
+                <th className="pl-3 text-right font-normal">new pipes</th>
+                <th className="pl-3 text-right font-normal">existing pipes</th>
+                <th className="pl-3 text-right font-normal">chest</th>
+                <th className="pl-3 text-right font-normal">total</th>
               </tr>
             </thead>
             <tbody className="num">
               {chests.map(([label, c]) => (
                 <tr key={label} className="border-t border-tin-rule">
                   <th scope="row" className="text-left font-normal">{label}</th>
-                  <td className="text-right">{kg(c.load.newPipesKg)}</td>
-                  <td className="text-right">{kg(c.load.existingPipesKg)}</td>
-                  <td className="text-right">{kg(c.load.chestKg)}</td>
-                  <td className="text-right font-semibold">{kg(c.load.totalKg)}</td>
+                  <td className="pl-3 text-right">{kg(c.load.newPipesKg)}</td>
+                  <td className="pl-3 text-right">{kg(c.load.existingPipesKg)}</td>
+                  <td className="pl-3 text-right">{kg(c.load.chestKg)}</td>
+                  <td className="pl-3 text-right font-semibold">{kg(c.load.totalKg)}</td>
                 </tr>
               ))}
             </tbody>
@@ -136,12 +136,12 @@ export function ChestBoard({
               {ranks.map((r) => (
                 <tr key={r.label} className="border-t border-tin-rule">
                   <th scope="row" className="text-left font-normal">{r.label}</th>
-                  <td className="text-right">{flow(r.windM3PerMin)}</td>
+                  <td className="pl-3 text-right">{flow(r.windM3PerMin)}</td>
                 </tr>
               ))}
               <tr className="border-t border-ink">
                 <th scope="row" className="text-left font-semibold">The division, extensions and borrowed stops included</th>
-                <td className="text-right font-semibold" data-testid={`chest-wind-total-${divisionName}`}>{flow(windM3PerMin)}</td>
+                <td className="pl-3 text-right font-semibold" data-testid={`chest-wind-total-${divisionName}`}>{flow(windM3PerMin)}</td>
               </tr>
             </tbody>
           </table>

@@ -132,7 +132,7 @@ export function ChestElevationSvg({ planting, chestHeightMm, units }: { planting
   const w = main.lengthMm + (offset ? gap + offset.lengthMm : 0);
   const top = Math.max(elevation.tallestMm, elevation.availableMm ?? 0);
   const m = Math.max(w, top, 800) * 0.05;
-  const font = Math.max(w, 800) / 55;
+  const font = Math.max(w, top, 800) / 55;
   const tooTall = elevation.tooTall.length > 0;
   const words = elevation.availableMm === null
     ? `tallest pipe ${lengthNumber(elevation.tallestMm, units)} ${u}; height in the case not yet given`

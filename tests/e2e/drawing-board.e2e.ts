@@ -104,3 +104,50 @@ test("a tonal director narrows a rank on the scaling chart, fits a scale from su
   await page.getByRole("button", { name: /Undo/ }).click();
   await expect(page.getByTestId("scaling-chart-gt").getByText(/\+4 ht, halving on 17/)).toBeVisible();
 });
+
+test("a tonal director opens a rank's pipe table from the chart, and sees in plan and elevation why the Great does not fit", async ({ page }) => {
+  const designer = await makeUser("designer");
+  const doc = smallDocument("Scheme E");
+  // Room in plan for the normal scales, but only 2 m clear above the chest: the 8′ basses stand taller.
+  doc.divisions![0]!.space = { lengthMm: 9000, depthMm: 900, heightMm: 2000 };
+  const { projectId, schemeId } = await projectWithScheme(designer, doc, `Chests e2e ${uid()}`);
+  await openAs(page, designer, schemePath(projectId, schemeId));
+  await page.getByRole("tab", { name: "Scales" }).click();
+  await expect(page.getByTestId("scaling-chart-gt")).toBeVisible();
+  await expect(page.getByTestId("scales-chest-words")).toHaveAttribute("data-fits", "fit");
+
+  // The chart's legend opens the rank's pipe table.
+  await page.getByRole("link", { name: "Pipe table of Principal 4′" }).click();
+  await page.waitForURL(/\/pipes\?stop=gt-pr/);
+  await expect(page.getByTestId("pipe-table").getByRole("heading", { name: "Great: Principal" })).toBeVisible();
+  await page.goBack();
+  await page.getByRole("tab", { name: "Scales" }).click();
+
+  // A much wider Open Diapason: the chest words above the chart turn, and the figures follow.
+  const words = page.getByTestId("scales-chest-words");
+  const before = await page.getByTestId("figures-chest-Great").textContent();
+  const form = page.getByRole("form", { name: "Scale of Open Diapason" });
+  await form.getByLabel("Deviation (semitones)").fill("12");
+  await form.getByRole("button", { name: "Apply scale" }).click();
+  await expect(words).toHaveAttribute("data-fits", "clash");
+  await expect(words).toContainText(/does not fit by [\d\u202f]+ mm in depth/);
+  await expect(page.getByTestId("figures-chest-Great")).not.toHaveText(before!);
+  await expectSaved(page, 2);
+
+  // In plan the space turns; in elevation the Open Diapason's basses are named as too tall, the Principal's not.
+  await page.getByRole("tab", { name: "Chests" }).click();
+  await expect(page.getByTestId("chest-space-Great")).toHaveAttribute("data-fits", "no");
+  await expect(page.getByTestId("chest-height-Great")).toHaveAttribute("data-fits", "no");
+  const tall = page.getByTestId("chest-height-words-Great");
+  await expect(tall).toContainText("need mitring or another place");
+  await expect(tall).toContainText(/Open Diapason 8′: C to \S+ \(\d+ pipes\)/);
+  await expect(tall).not.toContainText("Principal 4′");
+  await expect(page.getByTestId("chest-elevation-Great").locator("[data-too-tall]").first()).toBeVisible();
+  // Beside the chest: the weight standing on it and its ranks' wind, with their cautions.
+  await expect(page.getByTestId("chest-loads-Great")).toContainText("Main chest");
+  await expect(page.getByTestId("chest-Great").getByText(/structural engineer/)).toBeVisible();
+  await expect(page.getByTestId("chest-wind-Great")).toContainText("Open Diapason 8′");
+  await expect(page.getByTestId("chest-Great").getByText(/first estimate for sizing the blower/)).toBeVisible();
+  // The Pedal has no height given, and says so.
+  await expect(page.getByTestId("chest-height-words-Pedal")).toContainText("not yet given");
+});
