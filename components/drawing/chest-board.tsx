@@ -14,7 +14,7 @@ import { ChestElevationSvg, ChestPlanSvg } from "./chest-planting-svg";
 type Fit = { fits: boolean; lengthMarginMm: number; depthMarginMm: number } | null;
 
 export const loadCaution =
-  "These weights are a first estimate for the structural engineer. Whether a gallery or floor carries the organ — pipes, chests, case, wind system and the people who tune it — is for a structural engineer to judge under local building codes; do not load a gallery on these figures alone. Heavy pipes and chests are lifted with proper lifting gear by a trained crew.";
+  "These weights are a first estimate for the structural engineer. Whether a gallery or floor carries the organ — pipes, chests, case, wind system and the people who tune it — is for a structural engineer to judge under local building codes; do not load a gallery on these figures alone. Heavy pipes and chests are lifted with proper lifting gear by people trained to use it.";
 
 export const windNote =
   "A first estimate for sizing the blower and reservoirs (the full-organ chord on every stop), not a design of the wind system: the wind system is designed and proved on the voiced pipes.";

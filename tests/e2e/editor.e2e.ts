@@ -384,7 +384,7 @@ test("a chest that does not fit its space is said so in words and drawn so", asy
   await page.getByRole("tab", { name: "Chests" }).click();
   const chest = page.getByTestId("chest-Great");
   await expect(page.getByTestId("chest-words-Great")).toContainText("does not fit");
-  await expect(chest.getByRole("img")).toHaveAccessibleName(/^Chest of the Great: .*does not fit/);
+  await expect(chest.getByTestId("chest-plan-Great")).toHaveAccessibleName(/^Chest of the Great: .*does not fit/);
   await expect(page.getByTestId("chest-space-Great")).toHaveAttribute("data-fits", "no");
   await expect(page.getByTestId("chest-words-Pedal")).toContainText("space in the case not yet given");
 
