@@ -238,7 +238,7 @@ export function DivisionForm({
             <label className="label" htmlFor="div-space-height">clear height above the chest (mm, optional)</label>
             <input id="div-space-height" type="number" min={1} className="field num" defaultValue={initial?.space?.heightMm} aria-invalid={!!err.space?.heightMm}
               {...register("space.heightMm", { setValueAs: (v: unknown) => (v === "" || v === null || v === undefined ? undefined : Number(v)) })} />
-            <Err error={err.space?.heightMm} />
+            <FieldError error={err.space?.heightMm} />
           </div>
         </div>
       )}
