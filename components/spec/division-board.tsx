@@ -23,7 +23,7 @@ import { CarryContext } from "./carry-context";
 import { DivisionColumn } from "./division-column";
 import { DivisionPicker } from "./division-picker";
 import { findStop, moveDivision, moveStop } from "./doc-ops";
-import { pitchText } from "./format";
+import { stopTitle } from "./format";
 import { carryPlace, carryStep, isCarryKey, type Carried } from "./keyboard-carry";
 import { Pitch } from "./pitch";
 import { Treatment } from "./treatment-mark";
@@ -149,7 +149,7 @@ export const DivisionBoard = memo(function DivisionBoard({
       const id = idOf(dndId);
       if (typeOf(dndId) === "division") return `division ${shown.divisions.find((d) => d.id === id)?.name ?? ""}`;
       const found = findStop(shown, id);
-      return found ? `${found.stop.name} ${pitchText(found.stop)} (${found.division.name})` : "";
+      return found ? `${stopTitle(found.stop)} (${found.division.name})` : "";
     };
   }, [shown]);
 
@@ -174,8 +174,8 @@ export const DivisionBoard = memo(function DivisionBoard({
     if (before.division.id === after.division.id && before.index === after.index) return;
     const label =
       before.division.id === after.division.id
-        ? `Moved ${before.stop.name} ${pitchText(before.stop)} within the ${after.division.name}`
-        : `Moved ${before.stop.name} ${pitchText(before.stop)} from the ${before.division.name} to the ${after.division.name}`;
+        ? `Moved ${stopTitle(before.stop)} within the ${after.division.name}`
+        : `Moved ${stopTitle(before.stop)} from the ${before.division.name} to the ${after.division.name}`;
     onChange(d, label);
   }
 

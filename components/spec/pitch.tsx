@@ -1,8 +1,13 @@
-import { pitchText } from "./format";
+import { pitchBesideName, pitchText } from "./format";
 
-/** A stop's pitch typeset as the trade writes it: 8′, 2⅔′, a mixture's ranks IV. */
-export function Pitch({ stop, className = "" }: { stop: { footage: string | number; ranks?: number; family: string }; className?: string }) {
-  const text = pitchText(stop);
+type PitchStop = { footage: string | number; ranks?: number; family: string; name?: string };
+
+/**
+ * A stop's pitch typeset as the trade writes it: 8′, 2⅔′, a mixture's ranks IV. Beside a name that
+ * already carries the ranks ("Mixture IV"), the footage instead, so the ranks are not said twice.
+ */
+export function Pitch({ stop, className = "" }: { stop: PitchStop; className?: string }) {
+  const text = stop.name === undefined ? pitchText(stop) : pitchBesideName({ ...stop, name: stop.name });
   const invalid = text.endsWith("?");
   return (
     <span

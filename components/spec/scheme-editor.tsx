@@ -12,7 +12,7 @@ import { DivisionBoard } from "./division-board";
 import { useColumnFigures } from "./board-figures";
 import { addDivision, addStop, findStop, moveStop, newId, removeDivision, removeStop, setAccessories, setWorks, updateDivision, updateStop } from "./doc-ops";
 import { FiguresPanel } from "./figures-panel";
-import { formatDateTime, formatTimeOfDay, pitchText } from "./format";
+import { formatDateTime, formatTimeOfDay, stopTitle } from "./format";
 import { historyReducer, initHistory, nextRedo, nextUndo } from "./history";
 import { SaveStateBadge } from "./save-state";
 import { drawingRulesOf, useFigures, type FigureSource } from "./use-figures";
@@ -190,7 +190,7 @@ export function SchemeEditor({
 
   const sources = useMemo(() => {
     const out: { id: string; label: string }[] = [];
-    for (const d of doc.divisions) for (const s of d.stops) out.push({ id: s.id, label: `${d.name}: ${s.name} ${pitchText(s)}` });
+    for (const d of doc.divisions) for (const s of d.stops) out.push({ id: s.id, label: `${d.name}: ${stopTitle(s)}` });
     return out;
   }, [doc]);
 
@@ -411,7 +411,7 @@ export function SchemeEditor({
       <Dialog
         open={editing?.kind === "stop"}
         onClose={() => setEditing(null)}
-        title={editingStop ? `${editingStop.stop.name} ${pitchText(editingStop.stop)} — ${editingStop.division.name}` : `New stop — ${targetDivision?.name ?? ""}`}
+        title={editingStop ? `${stopTitle(editingStop.stop)} — ${editingStop.division.name}` : `New stop — ${targetDivision?.name ?? ""}`}
         wide
       >
         {editingStop && editable && doc.divisions.length > 1 && (
@@ -424,7 +424,7 @@ export function SchemeEditor({
               onChange={(e) => {
                 const to = doc.divisions.find((d) => d.id === e.target.value);
                 if (!to) return;
-                edit(moveStop(doc, editingStop.stop.id, to.id, to.stops.length), `Moved ${editingStop.stop.name} ${pitchText(editingStop.stop)} from the ${editingStop.division.name} to the ${to.name}`);
+                edit(moveStop(doc, editingStop.stop.id, to.id, to.stops.length), `Moved ${stopTitle(editingStop.stop)} from the ${editingStop.division.name} to the ${to.name}`);
               }}
             >
               {doc.divisions.map((d) => <option key={d.id} value={d.id}>{d.name}</option>)}
@@ -440,14 +440,14 @@ export function SchemeEditor({
             onCancel={() => setEditing(null)}
             onSubmit={(stop) => {
               // The form has no fields for survey measurements (the Scales tab keeps them): they stay with the stop.
-              if (editingStop) edit(updateStop(doc, { ...(editingStop.stop.survey ? { survey: editingStop.stop.survey } : {}), ...stop }), `Changed ${stop.name} ${pitchText(stop)}`);
-              else edit(addStop(doc, editing.divisionId, stop), `Added ${stop.name} ${pitchText(stop)} to the ${targetDivision?.name}`);
+              if (editingStop) edit(updateStop(doc, { ...(editingStop.stop.survey ? { survey: editingStop.stop.survey } : {}), ...stop }), `Changed ${stopTitle(stop)}`);
+              else edit(addStop(doc, editing.divisionId, stop), `Added ${stopTitle(stop)} to the ${targetDivision?.name}`);
               setEditing(null);
             }}
             onDelete={
               editingStop
                 ? () => {
-                    edit(removeStop(doc, editingStop.stop.id), `Deleted ${editingStop.stop.name} ${pitchText(editingStop.stop)} from the ${editingStop.division.name}`);
+                    edit(removeStop(doc, editingStop.stop.id), `Deleted ${stopTitle(editingStop.stop)} from the ${editingStop.division.name}`);
                     setEditing(null);
                   }
                 : undefined
@@ -460,7 +460,7 @@ export function SchemeEditor({
       <Dialog
         open={editing?.kind === "view"}
         onClose={() => setEditing(null)}
-        title={viewingStop ? `${viewingStop.stop.name} ${pitchText(viewingStop.stop)} — ${viewingStop.division.name}` : "Stop"}
+        title={viewingStop ? `${stopTitle(viewingStop.stop)} — ${viewingStop.division.name}` : "Stop"}
         wide
       >
         {viewingStop && (

@@ -3,7 +3,7 @@ import { useDraggable } from "@dnd-kit/core";
 import { memo, useCallback, useContext, useLayoutEffect } from "react";
 import type { DocStop } from "@/lib/spec/document";
 import { CarryContext } from "./carry-context";
-import { pitchText } from "./format";
+import { stopTitle } from "./format";
 import { Pitch } from "./pitch";
 import { Treatment } from "./treatment-mark";
 
@@ -61,7 +61,7 @@ const CardBody = memo(function CardBody({ stop, pipesText, editable, onOpen }: {
           type="button"
           onClick={() => onOpen(stop.id)}
           className={`min-w-0 truncate text-left font-serif text-[15px] font-semibold hover:underline ${removed ? "line-through decoration-1" : ""}`}
-          aria-label={`${editable ? "Edit" : "Details of"} ${stop.name} ${pitchText(stop)}`}
+          aria-label={`${editable ? "Edit" : "Details of"} ${stopTitle(stop)}`}
           title={stop.name}
         >
           {stop.name}
@@ -98,7 +98,7 @@ const StopGrip = memo(function StopGrip({ stop, disabled }: { stop: DocStop; dis
   useLayoutEffect(() => {
     node.current?.toggleAttribute("data-dragging", isDragging);
   }, [isDragging, node]);
-  return <DragHandle label={`Move ${stop.name} ${pitchText(stop)}`} carry={{ type: "stop", id: stop.id }} listeners={listeners} attributes={attributes} setRef={setRef} />;
+  return <DragHandle label={`Move ${stopTitle(stop)}`} carry={{ type: "stop", id: stop.id }} listeners={listeners} attributes={attributes} setRef={setRef} />;
 });
 
 /**

@@ -1,5 +1,8 @@
+import { createElement } from "react";
+import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
 import { pitchBesideName, stopTitle } from "@/components/spec/format";
+import { Pitch } from "@/components/spec/pitch";
 
 // How stop lists print a stop with its pitch: common practice, no source.
 describe("a stop's name with its pitch", () => {
@@ -23,5 +26,15 @@ describe("a stop's name with its pitch", () => {
     expect(stopTitle({ name: "Sesquialtera", footage: "2 2/3", ranks: 2, family: "mutation" })).toBe("Sesquialtera 2⅔′ II");
     // A name ending in a word that only looks like a numeral of other ranks keeps the full pitch.
     expect(stopTitle({ name: "Cornet V", footage: "8", ranks: 3, family: "mutation" })).toBe("Cornet V 8′ III");
+  });
+});
+
+describe("the pitch on a stop card", () => {
+  const text = (stop: Parameters<typeof Pitch>[0]["stop"]) => renderToStaticMarkup(createElement(Pitch, { stop })).replace(/<[^>]+>/g, "");
+
+  it("shows the footage beside a mixture named with its ranks, and the ranks beside one that is not", () => {
+    expect(text({ name: "Mixture IV", footage: "1 1/3", ranks: 4, family: "mixture" })).toBe("1⅓′");
+    expect(text({ name: "Mixture", footage: "1 1/3", ranks: 4, family: "mixture" })).toBe("IV");
+    expect(text({ name: "Principal", footage: "8", family: "principal" })).toBe("8′");
   });
 });

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PipeTableView } from "@/components/drawing/pipe-table-view";
-import { pitchText } from "@/components/spec/format";
+import { pitchBesideName, stopTitle } from "@/components/spec/format";
 import { pipeTable } from "@/lib/drawing/pipe-table";
 import { planDocument } from "@/lib/drawing/scheme-plan";
 import { parseDrawingUnits, type DrawingUnits } from "@/lib/drawing/units";
@@ -65,7 +65,7 @@ export default async function PipesPage({ params, searchParams }: { params: Prom
               <select id="pipes-stop" name="stop" defaultValue={chosen?.s.id} className="field">
                 {doc.divisions.map((d) => (
                   <optgroup key={d.id} label={d.name}>
-                    {d.stops.map((s) => <option key={s.id} value={s.id}>{s.name} {pitchText(s)}</option>)}
+                    {d.stops.map((s) => <option key={s.id} value={s.id}>{stopTitle(s)}</option>)}
                   </optgroup>
                 ))}
               </select>
@@ -85,7 +85,7 @@ export default async function PipesPage({ params, searchParams }: { params: Prom
                         className={`flex justify-between gap-2 rounded px-2 py-1 ${s.id === chosen?.s.id ? "bg-ink text-paper" : "hover:bg-paper"}`}
                       >
                         <span className="truncate">{s.name}</span>
-                        <span className="shrink-0 opacity-70">{pitchText(s)}</span>
+                        <span className="shrink-0 opacity-70">{pitchBesideName(s)}</span>
                       </Link>
                     </li>
                   ))}
