@@ -61,10 +61,7 @@ export function ChestPlanSvg({
       <g transform={`translate(${m} ${m})`}>
         <rect x={0} y={0} width={plan.lengthMm} height={plan.depthMm} fill={CARD} stroke={INK} strokeWidth={1.4} vectorEffect="non-scaling-stroke" />
         {plan.passageMm > 0 && (
-          <>
-            <rect x={0} y={plan.depthMm - plan.passageMm} width={plan.lengthMm} height={plan.passageMm} fill="#efe9dc" stroke={INK} strokeWidth={0.6} vectorEffect="non-scaling-stroke" />
-            <text x={plan.lengthMm / 2} y={plan.depthMm - plan.passageMm / 2} fontSize={font * 0.8} textAnchor="middle" dominantBaseline="middle" fill={TIN}>passage board</text>
-          </>
+          <rect x={0} y={plan.depthMm - plan.passageMm} width={plan.lengthMm} height={plan.passageMm} fill="#efe9dc" stroke={INK} strokeWidth={0.6} vectorEffect="non-scaling-stroke" />
         )}
         {plan.splitMm !== null && (
           <>
@@ -76,6 +73,11 @@ export function ChestPlanSvg({
         <Rows rows={plan.rows} length={plan.lengthMm} />
         {space && (
           <rect x={0} y={0} width={space.lengthMm} height={space.depthMm} fill="none" stroke={spaceColour} strokeWidth={clash ? 2.2 : 1.4} strokeDasharray="10 6" vectorEffect="non-scaling-stroke" data-testid={`chest-space-${name}`} data-fits={clash ? "no" : "yes"} />
+        )}
+        {/* Drawn after the space's outline, on a halo of the board's colour, so a dashed edge crossing it does not strike it through. */}
+        {plan.passageMm > 0 && (
+          <text x={plan.lengthMm / 2} y={plan.depthMm - plan.passageMm / 2} fontSize={font * 0.8} textAnchor="middle" dominantBaseline="middle" fill={TIN}
+            stroke="#efe9dc" strokeWidth={font * 0.35} paintOrder="stroke" strokeLinejoin="round">passage board</text>
         )}
         <g fontSize={font} fill={INK} className="num">
           <line x1={0} x2={plan.lengthMm} y1={-m * 0.45} y2={-m * 0.45} stroke={INK} strokeWidth={0.7} vectorEffect="non-scaling-stroke" />
