@@ -6,7 +6,7 @@
 import Papa from "papaparse";
 import type { z } from "zod";
 import { fullLabel, unitText, type RateField } from "./fields";
-import { checkRateValues, flattenRates, type RateValues } from "./values";
+import { checkRateValues, flattenRates, getAt, type RateValues } from "./values";
 
 export const EFFECTIVE_DATE_KEY = "effectiveDate";
 const HEADER = ["label", "key", "value", "unit"] as const;
@@ -66,15 +66,6 @@ export interface CsvOptions {
 }
 
 const NUMBER_TEXT = /^[+-]?(\d+(\.\d*)?|\.\d+)([eE][+-]?\d+)?$/;
-
-function getAt(obj: unknown, path: readonly string[]): unknown {
-  let cur = obj;
-  for (const p of path) {
-    if (typeof cur !== "object" || cur === null) return undefined;
-    cur = (cur as Record<string, unknown>)[p];
-  }
-  return cur;
-}
 
 /** One old-named row through the upgrade: the fields it now fills (with their values), or null for a name the upgrade does not know. */
 function upgradedRow(fields: readonly RateField[], upgrade: NonNullable<CsvOptions["upgrade"]>, key: string, value: string): RateValues | null {

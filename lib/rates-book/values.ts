@@ -10,7 +10,8 @@ import { currencyProblem } from "@/lib/quote/currency";
 export type RateValues = Record<string, string>;
 export type RateProblems = Record<string, string[]>;
 
-function getAt(obj: unknown, path: readonly string[]): unknown {
+/** The value at a dotted field's path in nested rates, or undefined where the path stops. */
+export function getAt(obj: unknown, path: readonly string[]): unknown {
   let cur = obj;
   for (const p of path) {
     if (typeof cur !== "object" || cur === null) return undefined;
