@@ -30,7 +30,11 @@ describe("a stop's name with its pitch", () => {
 });
 
 describe("the pitch on a stop card", () => {
-  const text = (stop: Parameters<typeof Pitch>[0]["stop"]) => renderToStaticMarkup(createElement(Pitch, { stop })).replace(/<[^>]+>/g, "");
+  // The markup is one <span>; its text lies between the end of the opening tag and the closing tag.
+  const text = (stop: Parameters<typeof Pitch>[0]["stop"]) => {
+    const html = renderToStaticMarkup(createElement(Pitch, { stop }));
+    return html.slice(html.indexOf(">") + 1, html.lastIndexOf("</span>"));
+  };
 
   it("shows the footage beside a mixture named with its ranks, and the ranks beside one that is not", () => {
     expect(text({ name: "Mixture IV", footage: "1 1/3", ranks: 4, family: "mixture" })).toBe("1⅓′");
