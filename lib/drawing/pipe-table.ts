@@ -10,13 +10,8 @@ import type { Scheme } from "@/lib/estimate/scheme";
 import { sizeClassLabels, type SizeClass } from "@/lib/estimate/departments";
 import { lengthDecimals, lengthIn, lengthUnitLabel, weightIn, weightUnitLabel, type DrawingUnits } from "./units";
 
-export interface PipeRow {
-  readonly rank: number;
-  readonly key: string;
-  readonly keyMidi: number;
-  readonly sounds: string;
-  readonly footage: string;
-  readonly frequencyHz: number;
+/** A pipe as the table shows it: the estimator's pitch fields as they are, its sizes split by kind of pipe. */
+export interface PipeRow extends Pick<PipeDetail, "rank" | "key" | "keyMidi" | "sounds" | "footage" | "frequencyHz"> {
   /** Flue pipes: the speaking length; null for reed pipes. */
   readonly speakingLengthMm: number | null;
   /** Reed pipes: the resonator's length; null for flues. */
