@@ -146,3 +146,59 @@ test("at 390 px the project page with two schemes, the quotation, survey files, 
     await ctx.close();
   }
 });
+
+/** Boxes on the page that scroll sideways inside themselves (a table cut off at the screen's edge). */
+async function boxesScrollingSideways(page: Page): Promise<string[]> {
+  return page.evaluate(() =>
+    [...document.querySelectorAll("main *")]
+      .filter((el) => getComputedStyle(el).overflowX === "auto" && el.scrollWidth > el.clientWidth + 1)
+      .map((el) => el.querySelector("[data-testid]")?.getAttribute("data-testid") ?? el.tagName),
+  );
+}
+
+test("at 390 px the project list, the schemes and the quotations read as cards, with nothing cut off at the edge", async ({ browser }) => {
+  test.setTimeout(120_000);
+  const designer = await makeUser("designer");
+  const estimator = await makeUser("estimator");
+  const { cookie, projectId, schemeId } = await projectWithScheme(designer, restoreScheme, `Phone cards ${uid()}`);
+  await addScheme(cookie, projectId, { ...restoreScheme, name: "Second scheme" });
+  expect((await api(`/api/projects/${projectId}/members`, { method: "POST", cookie, body: { email: estimator.email } })).status).toBe(200);
+  const ec = await signIn(estimator);
+  const set = (await api("/api/rate-sets", { method: "POST", cookie: ec, body: { name: `Card rates ${uid()}` } })).json.rateSet;
+  expect((await api(`/api/projects/${projectId}/quotations`, { method: "POST", cookie: ec, body: { schemeId, rateSetId: set.id } })).status).toBe(201);
+
+  const ctx = await browser.newContext({ viewport: { width: 390, height: 844 } });
+  const page = await ctx.newPage();
+  await openAs(page, designer, "/projects");
+  await whenInteractive(page);
+  const projects = page.getByTestId("projects-table");
+  await expect(projects.getByRole("columnheader")).toHaveCount(1);
+  const row = projects.getByTestId(/^project-Phone cards /);
+  await expect(row.getByTestId("project-phone-line")).toContainText("Enquiry · 2 schemes");
+  expect(await boxesScrollingSideways(page)).toEqual([]);
+  // The one column cannot be sorted by its header alone: the phone's own sort menu orders by name.
+  await page.getByLabel("Sort by").selectOption({ label: "Project ▲" });
+  const names = await projects.locator("tbody tr td:first-child a").allTextContents();
+  expect(names).toEqual([...names].sort((a, b) => a.localeCompare(b, "en-GB", { sensitivity: "base" })));
+
+  await page.goto(`/projects/${projectId}`);
+  await whenInteractive(page);
+  const scheme = page.getByTestId("scheme-Second scheme");
+  await expect(scheme.getByLabel("Status of Second scheme")).toBeInViewport({ ratio: 1 });
+  await expect(scheme).toContainText("Stops");
+  expect(await boxesScrollingSideways(page)).toEqual([]);
+  await ctx.close();
+
+  // The estimator's view of the same page lists the quotation, its total and date under labels.
+  const ectx = await browser.newContext({ viewport: { width: 390, height: 844 } });
+  const epage = await ectx.newPage();
+  await openAs(epage, estimator, `/projects/${projectId}`);
+  await whenInteractive(epage);
+  const quotations = epage.getByTestId("quotations-table");
+  await expect(quotations.locator("tbody").getByText("Valid until")).toBeVisible();
+  await expect(quotations.getByRole("columnheader", { name: "Valid until" })).toBeHidden();
+  const total = (await quotations.getByTestId("quotation-total").boundingBox())!;
+  expect(total.x + total.width, "the quotation's total ends within the screen's width").toBeLessThanOrEqual(390);
+  expect(await boxesScrollingSideways(epage)).toEqual([]);
+  await ectx.close();
+});

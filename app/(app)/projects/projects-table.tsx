@@ -24,6 +24,9 @@ function compare(a: ProjectSummary, b: ProjectSummary, key: SortKey): number {
   return String(x).localeCompare(String(y), "en-GB", { sensitivity: "base" });
 }
 
+/** On a phone only the project column stays; the rest is written under its name. */
+const wideOnly = "hidden sm:table-cell";
+
 export function ProjectsTable() {
   const [archived, setArchived] = useState(false);
   const [search, setSearch] = useState("");
@@ -63,6 +66,24 @@ export function ProjectsTable() {
             {projectStatuses.map((s) => <option key={s} value={s}>{projectStatusLabels[s]}</option>)}
           </select>
         </div>
+        {/* The column headers sort on a wide screen; a phone shows one column, so it sorts here. */}
+        <div className="sm:hidden">
+          <label className="label" htmlFor="project-sort">Sort by</label>
+          <select
+            id="project-sort"
+            className="field"
+            value={`${sort.key}:${sort.dir}`}
+            onChange={(e) => {
+              const [key, dir] = e.target.value.split(":");
+              setSort({ key: key as SortKey, dir: Number(dir) as 1 | -1 });
+            }}
+          >
+            {columns.flatMap((c) => [
+              <option key={`${c.key}:1`} value={`${c.key}:1`}>{c.label} ▲</option>,
+              <option key={`${c.key}:-1`} value={`${c.key}:-1`}>{c.label} ▼</option>,
+            ])}
+          </select>
+        </div>
         <label className="flex items-center gap-2 pb-1.5 text-sm">
           <input type="checkbox" className="accent-brass" checked={archived} onChange={(e) => setArchived(e.target.checked)} />
           Show archived
@@ -77,7 +98,7 @@ export function ProjectsTable() {
                 return (
                   <th
                     key={c.key}
-                    className={`px-4 py-2 ${c.numeric ? "text-right" : ""}`}
+                    className={`px-4 py-2 ${c.numeric ? "text-right" : ""} ${c.key === "name" ? "" : wideOnly}`}
                     aria-sort={active ? (sort.dir === 1 ? "ascending" : "descending") : "none"}
                   >
                     <button
@@ -104,13 +125,20 @@ export function ProjectsTable() {
                   </Link>
                   {p.archived && <span className="ml-2 rounded border border-tin-rule px-1 text-xs text-tin">▣ Archived</span>}
                   {p.instrument && <span className="block text-xs text-tin">{p.instrument}</span>}
+                  <span className="mt-1 block text-xs text-ink-soft sm:hidden" data-testid="project-phone-line">
+                    {[p.clientName, p.location].filter(Boolean).join(" · ")}
+                    <span className="block text-tin">
+                      {projectStatusLabels[p.status]} · {p.schemeCount === 1 ? "1 scheme" : `${p.schemeCount} schemes`}
+                      {p.targetDate && ` · target ${formatDate(p.targetDate)}`} · updated {formatDate(p.updatedAt)}
+                    </span>
+                  </span>
                 </td>
-                <td className="px-4 py-2">{p.clientName}{p.venue && <span className="block text-xs text-tin">{p.venue}</span>}</td>
-                <td className="px-4 py-2">{p.location || "–"}</td>
-                <td className="px-4 py-2">{projectStatusLabels[p.status]}</td>
-                <td className="px-4 py-2 num">{formatDate(p.targetDate)}</td>
-                <td className="px-4 py-2 text-right num">{p.schemeCount}</td>
-                <td className="px-4 py-2 num">{formatDate(p.updatedAt)}</td>
+                <td className={`${wideOnly} px-4 py-2`}>{p.clientName}{p.venue && <span className="block text-xs text-tin">{p.venue}</span>}</td>
+                <td className={`${wideOnly} px-4 py-2`}>{p.location || "–"}</td>
+                <td className={`${wideOnly} px-4 py-2`}>{projectStatusLabels[p.status]}</td>
+                <td className={`${wideOnly} px-4 py-2 num`}>{formatDate(p.targetDate)}</td>
+                <td className={`${wideOnly} px-4 py-2 text-right num`}>{p.schemeCount}</td>
+                <td className={`${wideOnly} px-4 py-2 num`}>{formatDate(p.updatedAt)}</td>
               </tr>
             ))}
           </tbody>

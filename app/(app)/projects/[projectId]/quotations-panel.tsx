@@ -1,6 +1,7 @@
 "use client";
 import { useMutation, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
+import { PhoneLabel, phoneTable } from "@/components/ui/phone-table";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ApiError } from "@/components/spec/api";
@@ -63,25 +64,25 @@ export function QuotationsPanel({ projectId, initial, schemes, rateSets, mayIssu
         <p className="px-4 py-3 text-sm text-tin">{role === "client" ? "No tender has been sent to you yet." : "No quotations yet."}</p>
       ) : (
         <div className="relative overflow-x-auto">
-          <table className="w-full text-sm" data-testid="quotations-table">
-            <thead className="text-left text-xs uppercase tracking-wide text-tin">
+          <table className={phoneTable.table} data-testid="quotations-table">
+            <thead className={phoneTable.head}>
               <tr>
                 <th className="px-4 py-2">Number</th><th className="px-4 py-2">Scheme</th><th className="px-4 py-2">State</th>
                 {(mayRead || role === "client") && <th className="px-4 py-2 text-right">Total</th>}
                 <th className="px-4 py-2">Valid until</th><th className="px-4 py-2"><span className="sr-only">Documents</span></th>
               </tr>
             </thead>
-            <tbody>
+            <tbody className={phoneTable.body}>
               {data.map((q) => (
-                <tr key={q.id} className="border-t border-tin-rule" data-testid={`quotation-${q.number}`}>
-                  <td className="whitespace-nowrap px-4 py-2 num font-medium">
+                <tr key={q.id} className={phoneTable.row} data-testid={`quotation-${q.number}`}>
+                  <td className={`${phoneTable.cell} whitespace-nowrap num font-medium`}>
                     {mayRead ? <Link href={`/projects/${projectId}/quotations/${q.id}`} className="underline decoration-tin-rule underline-offset-2 hover:decoration-brass">{q.number}</Link> : q.number}
                   </td>
-                  <td className="min-w-[9rem] px-4 py-2">{q.schemeName} <span className="text-xs text-tin">v{q.schemeVersion}</span></td>
-                  <td className="px-4 py-2"><QuoteStatusBadge status={q.status} />{mayRead && q.sentAt && <span className="ml-2 text-xs text-tin">sent {formatDate(q.sentAt)}</span>}</td>
-                  {(mayRead || role === "client") && <td className="whitespace-nowrap px-4 py-2 text-right num" data-testid="quotation-total">{q.totalAmount ? `${currencySymbol(q.currency)}${formatAmount(q.totalAmount)}` : "–"}</td>}
-                  <td className="whitespace-nowrap px-4 py-2 num">{formatDate(q.validUntil)}</td>
-                  <td className="whitespace-nowrap px-4 py-2 text-right">
+                  <td className={`${phoneTable.cell} sm:min-w-[9rem]`}>{q.schemeName} <span className="text-xs text-tin">v{q.schemeVersion}</span></td>
+                  <td className={phoneTable.cell}><QuoteStatusBadge status={q.status} />{mayRead && q.sentAt && <span className="ml-2 text-xs text-tin">sent {formatDate(q.sentAt)}</span>}</td>
+                  {(mayRead || role === "client") && <td className={`${phoneTable.cell} whitespace-nowrap sm:text-right num`}><PhoneLabel>Total</PhoneLabel><span data-testid="quotation-total">{q.totalAmount ? `${currencySymbol(q.currency)}${formatAmount(q.totalAmount)}` : "–"}</span></td>}
+                  <td className={`${phoneTable.cell} whitespace-nowrap num`}><PhoneLabel>Valid until</PhoneLabel>{formatDate(q.validUntil)}</td>
+                  <td className={`${phoneTable.cell} whitespace-nowrap sm:text-right`}>
                     {(mayRead || role === "client") && <a className="btn py-1 text-xs" href={`/api/quotations/${q.id}/documents/tender`}>Tender (.docx)</a>}
                     {role === "workshop" && <a className="btn py-1 text-xs" href={`/api/quotations/${q.id}/documents/work-list`}>Work list (.docx)</a>}
                   </td>

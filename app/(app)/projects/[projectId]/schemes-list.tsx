@@ -7,6 +7,7 @@ import { useCreateScheme, useDuplicateScheme, usePatchScheme } from "@/lib/query
 import { formatDateTime } from "@/components/spec/format";
 import { schemeStatuses, type SchemeStatus } from "@/lib/spec/document";
 import type { SchemeSummary } from "@/lib/spec/projects";
+import { PhoneLabel, phoneTable } from "@/components/ui/phone-table";
 
 export const schemeStatusLabels: Record<SchemeStatus, string> = {
   draft: "Draft",
@@ -56,7 +57,7 @@ function NewSchemeForm({ projectId }: { projectId: string }) {
 }
 
 /** Columns a phone can do without: the counts, version and date are in the editor too. */
-const wideOnly = "hidden sm:table-cell";
+const { wideOnly, cell } = phoneTable;
 
 function SchemeRow({ projectId, scheme, mayEdit, clientView, copiedFrom }: { projectId: string; scheme: SchemeSummary; mayEdit: boolean; clientView: boolean; copiedFrom?: string }) {
   const router = useRouter();
@@ -73,8 +74,8 @@ function SchemeRow({ projectId, scheme, mayEdit, clientView, copiedFrom }: { pro
   };
 
   return (
-    <tr className="border-t border-tin-rule align-top" data-testid={`scheme-${scheme.name}`}>
-      <td className="min-w-[13rem] px-4 py-2">
+    <tr className={`${phoneTable.row} sm:align-top`} data-testid={`scheme-${scheme.name}`}>
+      <td className={`${phoneTable.lead} sm:min-w-[13rem]`}>
         <Link href={`/projects/${projectId}/schemes/${scheme.id}`} className="font-medium underline decoration-tin-rule underline-offset-2 hover:decoration-brass">
           {scheme.name}
         </Link>
@@ -99,10 +100,11 @@ function SchemeRow({ projectId, scheme, mayEdit, clientView, copiedFrom }: { pro
         )}
         {error && <p role="alert" className="field-error">{error}</p>}
       </td>
-      <td className={`${wideOnly} px-4 py-2 text-right num`}>{scheme.divisionCount}</td>
-      <td className="px-4 py-2 text-right num">{scheme.stopCount}</td>
-      <td className={`${wideOnly} px-4 py-2 text-right num`}>v{scheme.version}</td>
-      <td className="px-4 py-2">
+      <td className={`${wideOnly} text-right num`}>{scheme.divisionCount}</td>
+      <td className={`${cell} text-sm sm:text-right num`}><PhoneLabel>Stops</PhoneLabel>{scheme.stopCount}</td>
+      <td className={`${wideOnly} text-right num`}>v{scheme.version}</td>
+      <td className={`${cell} flex items-center gap-1.5`}>
+        <PhoneLabel>Status</PhoneLabel>
         {mayEdit ? (
           <select
             className="field w-auto min-w-[9.5rem] py-1"
@@ -118,7 +120,8 @@ function SchemeRow({ projectId, scheme, mayEdit, clientView, copiedFrom }: { pro
         )}
       </td>
       {!clientView && (
-        <td className="px-4 py-2">
+        <td className={cell}>
+          <PhoneLabel>Committee</PhoneLabel>
           {mayEdit ? (
             <label className="inline-flex items-center gap-1.5 text-xs">
               <input
@@ -133,8 +136,8 @@ function SchemeRow({ projectId, scheme, mayEdit, clientView, copiedFrom }: { pro
           ) : scheme.sharedWithClient ? "Shared" : "Not shared"}
         </td>
       )}
-      <td className={`${wideOnly} px-4 py-2 num text-xs`}>{formatDateTime(scheme.updatedAt)}</td>
-      <td className="px-4 py-2 text-right whitespace-nowrap">
+      <td className={`${wideOnly} num text-xs`}>{formatDateTime(scheme.updatedAt)}</td>
+      <td className={`${cell} whitespace-nowrap sm:text-right`}>
         <Link className="btn py-1 text-xs" href={`/projects/${projectId}/schemes/${scheme.id}/stop-list`}>Stop list</Link>
         {mayEdit && !copying && (
           <button type="button" className="btn ml-1 py-1 text-xs" onClick={() => setCopying(true)} aria-label={`Duplicate ${scheme.name}`}>
@@ -158,8 +161,8 @@ export function SchemesList({ projectId, schemes, mayEdit, clientView }: { proje
       </div>
       {/* relative: the header's screen-reader-only words are placed inside the scrolling box, not beside the page */}
       <div className="relative overflow-x-auto">
-        <table className="w-full text-sm" data-testid="schemes-table">
-          <thead className="text-left text-xs uppercase tracking-wide text-tin">
+        <table className={phoneTable.table} data-testid="schemes-table">
+          <thead className={phoneTable.head}>
             <tr>
               <th className="px-4 py-2">Scheme</th>
               <th className={`${wideOnly} px-4 py-2 text-right`}>Divisions</th>
@@ -171,7 +174,7 @@ export function SchemesList({ projectId, schemes, mayEdit, clientView }: { proje
               <th className="px-4 py-2"><span className="sr-only">Actions</span></th>
             </tr>
           </thead>
-          <tbody>
+          <tbody className={phoneTable.body}>
             {schemes.map((s) => (
               <SchemeRow key={s.id} projectId={projectId} scheme={s} mayEdit={mayEdit} clientView={clientView} copiedFrom={s.copiedFromId ? names.get(s.copiedFromId) : undefined} />
             ))}

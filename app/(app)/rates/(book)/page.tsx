@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { listRateSets } from "@/db/queries/rate-sets";
 import { formatDate } from "@/components/spec/format";
+import { PhoneLabel, phoneTable } from "@/components/ui/phone-table";
 import { requirePageUser } from "@/lib/server/guard";
 import { NewRateSetForm } from "../new-rate-set-form";
 
@@ -16,22 +17,22 @@ export default async function RatesPage() {
         <h1 className="text-3xl font-semibold">Rate book</h1>
         <p className="text-ink-soft">The firm&rsquo;s hourly rates, material prices, labour norms and percentages. Schemes are priced with the current set unless a quotation names another; every saved change is a new version.</p>
       </div>
-      <section className="panel overflow-x-auto">
-        <table className="w-full text-sm" data-testid="rate-sets">
-          <thead className="text-left text-xs uppercase tracking-wide text-tin">
+      <section className="panel">
+        <table className={phoneTable.table} data-testid="rate-sets">
+          <thead className={phoneTable.head}>
             <tr><th className="px-4 py-2">Rate set</th><th className="px-4 py-2">Version</th><th className="px-4 py-2">Effective</th><th className="px-4 py-2">Currency</th><th className="px-4 py-2">Provenance</th></tr>
           </thead>
-          <tbody>
+          <tbody className={phoneTable.body}>
             {sets.map((s) => (
-              <tr key={s.id} className="border-t border-tin-rule">
-                <td className="px-4 py-2">
+              <tr key={s.id} className={phoneTable.row}>
+                <td className={phoneTable.lead}>
                   <Link href={`/rates/${s.id}`} className="font-medium underline decoration-tin-rule underline-offset-2 hover:decoration-brass">{s.name}</Link>
-                  {s.isCurrent && <span className="ml-2 rounded border border-fit/40 bg-fit-light px-1.5 text-xs text-fit">✓ current</span>}
+                  {s.isCurrent && <span className="ml-2 whitespace-nowrap rounded border border-fit/40 bg-fit-light px-1.5 text-xs text-fit">✓ current</span>}
                 </td>
-                <td className="px-4 py-2 num">v{s.version}</td>
-                <td className="px-4 py-2 num">{formatDate(s.effectiveDate)}</td>
-                <td className="px-4 py-2">{s.currency}</td>
-                <td className="px-4 py-2 text-xs text-ink-soft">{s.provenance}</td>
+                <td className={`${phoneTable.cell} num`}><PhoneLabel>Version</PhoneLabel>v{s.version}</td>
+                <td className={`${phoneTable.cell} num`}><PhoneLabel>Effective</PhoneLabel>{formatDate(s.effectiveDate)}</td>
+                <td className={phoneTable.cell}>{s.currency}</td>
+                <td className={`${phoneTable.cell} basis-full text-xs text-ink-soft`}>{s.provenance}</td>
               </tr>
             ))}
           </tbody>
