@@ -21,6 +21,8 @@ export function PipeTableView({ table, units, rules }: { table: PipeTable; units
   const reeds = table.rows.some((r) => r.resonatorLengthMm !== null);
   const wood = table.rows.some((r) => r.wood);
   const ranks = new Set(table.rows.map((r) => r.rank)).size;
+  // On a narrow screen the table scrolls sideways inside its box; the key stays in sight (a single rank only: with a rank column before it, both would have to stay).
+  const keySticky = ranks > 1 ? "" : "sticky left-0 print:static";
   const lead = table.rows.some((r) => !r.wood && containsLead(rules.alloys[r.material as Metal]));
   const states = (Object.keys(t.byState) as (keyof typeof t.byState)[]).filter((k) => t.byState[k] > 0);
   return (
@@ -43,7 +45,7 @@ export function PipeTableView({ table, units, rules }: { table: PipeTable; units
           <thead className="bg-paper text-left text-[11px] uppercase tracking-wide text-tin">
             <tr>
               {ranks > 1 && <th scope="col" className="px-2 py-1.5">Rank</th>}
-              <th scope="col" className="px-2 py-1.5">Key</th>
+              <th scope="col" className={`px-2 py-1.5 ${keySticky} bg-paper`}>Key</th>
               <th scope="col" className="px-2 py-1.5">Sounds</th>
               <th scope="col" className="px-2 py-1.5 text-right">Hz</th>
               <th scope="col" className="px-2 py-1.5 text-right">Speaking length ({L})</th>
@@ -63,7 +65,7 @@ export function PipeTableView({ table, units, rules }: { table: PipeTable; units
             {table.rows.map((r) => (
               <tr key={`${r.rank}:${r.keyMidi}`} className={`border-t border-tin-rule/60 ${r.state === "shared" || r.state === "borrowed" ? "text-ink-soft" : ""} ${r.keyMidi % 12 === 0 ? "border-t-tin" : ""}`}>
                 {ranks > 1 && <td className="px-2 py-1">{r.rank}</td>}
-                <td className="px-2 py-1 font-medium">{noteText(r.key)}</td>
+                <td className={`px-2 py-1 font-medium ${keySticky} bg-paper-card`}>{noteText(r.key)}</td>
                 <td className="px-2 py-1">{noteText(r.sounds)} <span className="text-tin">{r.footage}′</span></td>
                 <td className="px-2 py-1 text-right">{nf(r.frequencyHz, r.frequencyHz < 100 ? 2 : 1)}</td>
                 <td className="px-2 py-1 text-right">{len(r.speakingLengthMm)}</td>

@@ -34,9 +34,9 @@ export function OutboxList() {
         <li key={m.id} className="panel" data-testid="outbox-message" data-kind={m.kind} data-status={m.status}>
           <details>
             <summary className="flex cursor-pointer flex-wrap items-baseline gap-x-4 gap-y-1 px-4 py-3">
-              <span className="min-w-0 flex-1">
+              <span className="min-w-0 basis-full sm:basis-auto sm:flex-1">
                 <span className="block font-semibold">{m.subject}</span>
-                <span className="block truncate text-xs text-tin">To {m.to.join(", ")} · {kindLabels[m.kind] ?? m.kind} · {formatDateTime(m.createdAt)}</span>
+                <span className="block break-words text-xs text-tin sm:truncate">To {m.to.join(", ")} · {kindLabels[m.kind] ?? m.kind} · {formatDateTime(m.createdAt)}</span>
               </span>
               <span className="text-xs"><Status m={m} /></span>
             </summary>

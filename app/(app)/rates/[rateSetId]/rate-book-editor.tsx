@@ -277,7 +277,7 @@ export function RateBookEditor({ initial }: { initial: RateSetRead }) {
             <h1 className="text-3xl font-semibold" data-testid="rate-set-name">{data.set.name}</h1>
             <p className="text-sm text-ink-soft">
               Version <span data-testid="rate-set-version">{data.set.version}</span>, effective {formatDate(data.current.effectiveDate)}
-              {data.set.isCurrent ? <span className="ml-2 rounded border border-fit/40 bg-fit-light px-1.5 text-xs text-fit">✓ current set</span> : (
+              {data.set.isCurrent ? <span className="ml-2 whitespace-nowrap rounded border border-fit/40 bg-fit-light px-1.5 text-xs text-fit">✓ current set</span> : (
                 <button type="button" className="btn ml-2 py-0.5 text-xs" onClick={() => current.mutate()} disabled={current.isPending}>Make this the current set</button>
               )}
             </p>

@@ -203,9 +203,9 @@ export function QuotationEditor({ initial, mayIssue, projectName }: { initial: Q
           <h1 className="text-3xl font-semibold">Quotation <span className="num" data-testid="quote-number">{data.number}</span></h1>
           <p className="flex flex-wrap items-center gap-x-3 text-sm text-ink-soft">
             <QuoteStatusBadge status={data.status} />
-            <span>{q.scheme.name}, version {q.scheme.version}</span>
-            <span>rates “{q.rateSet.name}” v{q.rateSet.version} (effective {formatDate(q.rateSet.effectiveDate)})</span>
-            {q.issuedOn && <span>issued {formatDate(q.issuedOn)}, valid until {formatDate(q.validUntil)}</span>}
+            <span>Scheme {q.scheme.name}, version {q.scheme.version}</span>
+            <span>Rates “{q.rateSet.name}” v{q.rateSet.version} (effective {formatDate(q.rateSet.effectiveDate)})</span>
+            {q.issuedOn && <span>Issued {formatDate(q.issuedOn)}, valid until {formatDate(q.validUntil)}</span>}
           </p>
         </div>
         <div className="flex flex-wrap gap-2">
