@@ -53,35 +53,40 @@ export type SchemeHead = Pick<Scheme, "id" | "projectId" | "name" | "description
  */
 // Prepared once (it runs on every scheme and estimate read); the membership test is cheap and only
 // consulted for clients.
+export const schemeHeadColumns = {
+  id: schemes.id,
+  projectId: schemes.projectId,
+  name: schemes.name,
+  description: schemes.description,
+  status: schemes.status,
+  sharedWithClient: schemes.sharedWithClient,
+  version: schemes.version,
+  copiedFromId: schemes.copiedFromId,
+  updatedAt: schemes.updatedAt,
+  updatedByName: users.name,
+  pitchHz: projects.pitchHz,
+  temperatureC: projects.temperatureC,
+  member: sql<boolean>`exists (select 1 from ${projectMembers} where ${projectMembers.projectId} = ${projects.id} and ${projectMembers.userId} = ${sql.placeholder("userId")})`,
+};
 const schemeHeadQuery = db
-  .select({
-    id: schemes.id,
-    projectId: schemes.projectId,
-    name: schemes.name,
-    description: schemes.description,
-    status: schemes.status,
-    sharedWithClient: schemes.sharedWithClient,
-    version: schemes.version,
-    copiedFromId: schemes.copiedFromId,
-    updatedAt: schemes.updatedAt,
-    updatedByName: users.name,
-    pitchHz: projects.pitchHz,
-    temperatureC: projects.temperatureC,
-    member: sql<boolean>`exists (select 1 from ${projectMembers} where ${projectMembers.projectId} = ${projects.id} and ${projectMembers.userId} = ${sql.placeholder("userId")})`,
-  })
+  .select(schemeHeadColumns)
   .from(schemes)
   .innerJoin(projects, eq(projects.id, schemes.projectId))
   .leftJoin(users, eq(users.id, schemes.updatedById))
   .where(eq(schemes.id, sql.placeholder("schemeId")))
   .limit(1)
   .prepare("scheme_head");
+/** The head of a scheme this user may see (a client: only shared schemes of their projects), or 404. */
+export function admitSchemeHead<R extends { member: boolean; sharedWithClient: boolean }>(user: SessionUser, row: R | undefined): Omit<R, "member"> {
+  if (!row || (user.role === "client" && !(row.member && row.sharedWithClient))) throw new AppError("not_found", "No such scheme.");
+  const { member: _member, ...head } = row;
+  return head;
+}
 
 export async function loadSchemeHeadFor({ user, schemeId }: { user: SessionUser; schemeId: string }): Promise<SchemeHead> {
   if (!isUuid(schemeId)) throw new AppError("not_found", "No such scheme.");
   const [row] = await schemeHeadQuery.execute({ schemeId, userId: user.id });
-  if (!row || (user.role === "client" && !(row.member && row.sharedWithClient))) throw new AppError("not_found", "No such scheme.");
-  const { member: _member, ...head } = row;
-  return head;
+  return admitSchemeHead(user, row);
 }
 
 /**

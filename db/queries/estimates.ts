@@ -1,15 +1,15 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
+import { and, eq, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { schemeRevisions } from "@/db/schema";
+import { projects, schemeRevisions, schemes, users } from "@/db/schema";
 import { can } from "@/lib/roles";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
-import { firmPricing } from "@/lib/server/rates";
 import { cached, readCache } from "@/lib/server/read-cache";
 import { schemeDocumentSchema, type SchemeDocument } from "@/lib/spec/document";
 import { estimateDocument, withoutMoney } from "@/lib/spec/estimate";
-import { loadSchemeHeadFor, type SchemeHead } from "./access";
+import { admitSchemeHead, isUuid, schemeHeadColumns, type SchemeHead } from "./access";
+import { currentPricingVersionId, getPricingRates, getRatesOfVersion } from "./rate-sets";
 
 /** The document of exactly this version: from the read cache, or from its revision snapshot. */
 async function documentOf(head: SchemeHead): Promise<SchemeDocument> {
@@ -24,6 +24,23 @@ async function documentOf(head: SchemeHead): Promise<SchemeDocument> {
   return schemeDocumentSchema.parse(row.document);
 }
 
+// loadSchemeHeadFor's row and rule and, in the same round trip, the id of the rate-set version the
+// firm prices with now (null: no rate book yet). Prepared once: it runs on every estimate read.
+const schemeHeadPricedQuery = db
+  .select({ ...schemeHeadColumns, pricingVersionId: currentPricingVersionId })
+  .from(schemes)
+  .innerJoin(projects, eq(projects.id, schemes.projectId))
+  .leftJoin(users, eq(users.id, schemes.updatedById))
+  .where(eq(schemes.id, sql.placeholder("schemeId")))
+  .limit(1)
+  .prepare("scheme_head_priced");
+
+async function loadSchemeHeadPricedFor({ user, schemeId }: { user: SessionUser; schemeId: string }): Promise<SchemeHead & { pricingVersionId: string | null }> {
+  if (!isUuid(schemeId)) throw new AppError("not_found", "No such scheme.");
+  const [row] = await schemeHeadPricedQuery.execute({ schemeId, userId: user.id });
+  return admitSchemeHead(user, row);
+}
+
 const utf8 = new TextEncoder();
 
 /**
@@ -33,11 +50,14 @@ const utf8 = new TextEncoder();
  * kept in the read cache; a save, a tuning change or a new rate version make a new key.
  */
 export async function getEstimateJsonForUser({ user, schemeId, rateSetId }: { user: SessionUser; schemeId: string; rateSetId?: string | null }): Promise<Uint8Array<ArrayBuffer>> {
-  const head = await loadSchemeHeadFor({ user, schemeId });
+  // The scheme's version and the rate-set version it is priced with, read from PostgreSQL in one round
+  // trip; the rates themselves are needed only when the estimate is not in the cache yet.
+  const { pricingVersionId, ...head } = await loadSchemeHeadPricedFor({ user, schemeId });
   const money = can(user.role, "money:read");
-  const { rates, key: ratesKey } = await firmPricing({ rateSetId });
+  const ratesKey = rateSetId || !pricingVersionId ? (await getPricingRates({ rateSetId })).versionId : pricingVersionId;
   const key = [head.id, head.version, head.pitchHz, head.temperatureC, ratesKey, money ? "money" : "no-money"].join(":");
   return cached(readCache.estimates, key, async () => {
+    const rates = await getRatesOfVersion({ versionId: ratesKey });
     const result = estimateDocument(await documentOf(head), { pitchHz: head.pitchHz, temperatureC: head.temperatureC }, rates);
     if (!result.ok) throw new AppError("invalid", "This scheme cannot be estimated yet.", { document: [...result.messages] });
     return utf8.encode(JSON.stringify({ version: head.version, estimate: money ? result.estimate : withoutMoney(result.estimate) }));

@@ -1,5 +1,6 @@
 import "server-only";
-import { and, asc, desc, eq } from "drizzle-orm";
+import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { LRUCache } from "lru-cache";
 import { db } from "@/db/client";
 import { rateSets, rateSetVersions, users, type RateSet, type RateSetVersion } from "@/db/schema";
 import { parseRates, ratesSchema, type Rates } from "@/lib/estimate";
@@ -116,28 +117,76 @@ export async function getRateSet({ rateSetId }: { rateSetId: string }) {
   };
 }
 
+/** Frozen all the way down: one parsed object is shared by every request that prices with it. */
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === "object" && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const v of Object.values(value)) deepFreeze(v);
+  }
+  return value;
+}
+
+/**
+ * Parsed rates by rate-set version id. A version row is never changed once written (every edit is a
+ * new version with a new id), so its parsed rates can be kept for as long as the process lives; the
+ * id always comes from the database in the same request, so a new version is never missed.
+ */
+const parsedRates = new LRUCache<string, Promise<Rates>>({ max: 64 });
+
+/** The rates of one stored version, parsed once per process (the zod parse of the whole rates object
+ * and the transfer of its JSON otherwise fall on every priced request). */
+export function getRatesOfVersion({ versionId }: { versionId: string }): Promise<Rates> {
+  let rates = parsedRates.get(versionId);
+  if (!rates) {
+    rates = db
+      .select({ rates: rateSetVersions.rates })
+      .from(rateSetVersions)
+      .where(eq(rateSetVersions.id, versionId))
+      .limit(1)
+      .then(([row]) => {
+        if (!row) throw new AppError("conflict", "The rate book changed while it was being read; try again.");
+        return deepFreeze(readRates(row.rates));
+      });
+    parsedRates.set(versionId, rates);
+    rates.catch(() => parsedRates.delete(versionId));
+  }
+  return rates;
+}
+
+/**
+ * The version a scheme is priced with when no set is named: the current set's latest version, or, when
+ * no set is marked current (e.g. the current one was just renamed away), the oldest set's. One
+ * subquery, so a read can fetch it in the same round trip as its scheme (`db/queries/estimates.ts`).
+ */
+export const currentPricingVersionId = sql<string | null>`(select v.id from ${rateSets} s join ${rateSetVersions} v on v.rate_set_id = s.id and v.version = s.version order by s.is_current desc, s.created_at asc limit 1)`;
+
+const pricingColumns = {
+  setId: rateSets.id,
+  setName: rateSets.name,
+  versionId: rateSetVersions.id,
+  version: rateSetVersions.version,
+  effectiveDate: rateSetVersions.effectiveDate,
+};
+
 /** The rates a scheme is priced with: the chosen set's latest version, or the current set's. */
 export async function getPricingRates({ rateSetId }: { rateSetId?: string | null } = {}): Promise<{ setId: string; setName: string; versionId: string; version: number; effectiveDate: string; rates: Rates }> {
-  await ensureRateBook();
-  const where = rateSetId ? eq(rateSets.id, rateSetId) : eq(rateSets.isCurrent, true);
   if (rateSetId && !isUuid(rateSetId)) throw new AppError("not_found", "No such rate set.");
-  let [row] = await db
-    .select({ set: rateSets, v: rateSetVersions })
-    .from(rateSets)
-    .innerJoin(rateSetVersions, and(eq(rateSetVersions.rateSetId, rateSets.id), eq(rateSetVersions.version, rateSets.version)))
-    .where(where)
-    .limit(1);
-  if (!row && !rateSetId) {
-    // No set is marked current (e.g. the current one was just renamed away): take the oldest.
-    [row] = await db
-      .select({ set: rateSets, v: rateSetVersions })
+  const find = () =>
+    db
+      .select(pricingColumns)
       .from(rateSets)
       .innerJoin(rateSetVersions, and(eq(rateSetVersions.rateSetId, rateSets.id), eq(rateSetVersions.version, rateSets.version)))
-      .orderBy(asc(rateSets.createdAt))
+      .where(rateSetId ? eq(rateSets.id, rateSetId) : undefined)
+      // The current set first; when none is marked current, the oldest.
+      .orderBy(desc(rateSets.isCurrent), asc(rateSets.createdAt))
       .limit(1);
+  let [row] = await find();
+  if (!row && !rateSetId) {
+    await ensureRateBook();
+    [row] = await find();
   }
   if (!row) throw new AppError("not_found", "No such rate set.");
-  return { setId: row.set.id, setName: row.set.name, versionId: row.v.id, version: row.v.version, effectiveDate: row.v.effectiveDate, rates: readRates(row.v.rates) };
+  return { ...row, rates: await getRatesOfVersion({ versionId: row.versionId }) };
 }
 
 export async function getRateSetVersionById({ id }: { id: string }) {

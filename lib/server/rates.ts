@@ -16,15 +16,6 @@ export async function firmRates({ rateSetId }: { rateSetId?: string | null } = {
 }
 
 /**
- * The rates in force with a key naming exactly that rate-set version, part of every cached
- * estimate's key: a saved change to the rate book is a new version, so estimates are worked out afresh.
- */
-export async function firmPricing({ rateSetId }: { rateSetId?: string | null } = {}): Promise<{ rates: Rates; key: string }> {
-  const pricing = await getPricingRates({ rateSetId });
-  return { rates: pricing.rates, key: pricing.versionId };
-}
-
-/**
  * Where a scheme page's figures come from. Only roles with money:read (who alone edit schemes) hold
  * the firm's rates in the browser and recompute as they edit. Everyone else reads a saved scheme, so
  * its figures are worked out here once and sent without money, and the browser gets only the rules a
