@@ -11,7 +11,7 @@ import { requirePageUser, type SessionUser } from "@/lib/server/guard";
 import { figureSourceFor, firmRates } from "@/lib/server/rates";
 import type { SchemeRead } from "@/lib/spec/document";
 import { estimateDocument } from "@/lib/spec/estimate";
-import { loadSchemePage } from "./load";
+import { loadSchemePage } from "../load";
 
 export const metadata: Metadata = { title: "Scheme" };
 
