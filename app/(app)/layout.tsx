@@ -15,14 +15,16 @@ export default async function SignedInLayout({ children }: { children: ReactNode
     { href: "/admin/firm", label: "Firm details", show: can(user.role, "firm:manage") },
     { href: "/admin/mail", label: "Outgoing mail", show: can(user.role, "mail:read") },
   ].filter((l) => l.show);
+  // The header's links are not prefetched: on every page load they would render Home and Projects on
+  // the server and parse them in the browser while the page itself is still loading (the editor too).
   return (
     <div className="min-h-screen">
       <header className="border-b border-tin-rule bg-paper-card/80 print:hidden">
         <div className="mx-auto flex max-w-[1600px] flex-wrap items-center gap-x-6 gap-y-1 px-5 py-2.5">
-          <Link href="/" aria-label="Stopwright home"><Wordmark /></Link>
+          <Link href="/" prefetch={false} aria-label="Stopwright home"><Wordmark /></Link>
           <nav aria-label="Main" className="flex flex-wrap gap-1 text-sm">
             {links.map((l) => (
-              <Link key={l.href} href={l.href} className="rounded px-2.5 py-1 text-ink-soft hover:bg-paper-deep hover:text-ink">
+              <Link key={l.href} href={l.href} prefetch={false} className="rounded px-2.5 py-1 text-ink-soft hover:bg-paper-deep hover:text-ink">
                 {l.label}
               </Link>
             ))}
