@@ -2,7 +2,9 @@
 import { memo } from "react";
 import { Caution } from "@/components/ui/caution";
 import { StateMark } from "@/components/ui/state-mark";
-import { departmentLabels, departments, packageLabels } from "@/lib/estimate";
+// The departments module alone: the estimator's barrel would bring the whole estimator and zod into
+// the editor's first scripts, which the browser runs only in the figures worker.
+import { departmentLabels, departments } from "@/lib/estimate/departments";
 import { materialLabels } from "./format";
 import { chestWords, fitState } from "./chest-words";
 import { formatMoney, formatNumber } from "./format";
@@ -107,7 +109,7 @@ export const FiguresPanel = memo(function FiguresPanel({ figures, showMoney, sta
                 const cost = showMoney && "money" in e ? e.money.byPackage.find((b) => b.package === p.package)?.directCostAmount : undefined;
                 return (
                   <tr key={p.package} data-testid={`fig-part-${p.package}`}>
-                    <td className="py-0.5 text-ink-soft">{packageLabels[p.package]}</td>
+                    <td className="py-0.5 text-ink-soft">{p.label}</td>
                     <td className="num py-0.5 text-right">{formatNumber(p.hoursTotal, 0)} h</td>
                     {showMoney && <td className="num py-0.5 pl-2 text-right">{cost && "money" in e ? money(cost, e.money.currency) : "–"}</td>}
                   </tr>

@@ -1,9 +1,12 @@
 /** How the trade writes pitches, compasses and what happens to each stop: shared by the editor, the stop list and the drawings. */
-import {
-  actions, chestTypes, families, constructions, findings, materials, origins, pipeWorks, resonatorLengths,
-  type Finding, type Origin, type PipeWork,
+// Types only from the scheme model and the pitch module alone: the editor's first scripts use this
+// module, and the scheme model or the estimator's barrel would bring zod and the whole estimator with it
+// (they run in the figures worker). `format.test.ts` holds the orders below equal to the model's.
+import type {
+  actions, chestTypes, families, constructions, materials, resonatorLengths,
+  Finding, Origin, PipeWork,
 } from "@/lib/estimate/scheme";
-import { formatFootage, parseFootage } from "@/lib/estimate";
+import { formatFootage, parseFootage } from "@/lib/estimate/pitch";
 import { formatAmount } from "@/lib/quote/amount-text";
 import { currencySymbol } from "@/lib/quote/currency";
 
@@ -152,13 +155,13 @@ type DispositionLike = { origin: Origin; work?: readonly PipeWork[]; addedPipes?
 export function dispositionMark(stop: DispositionLike): DispositionMark {
   if (stop.origin !== "existing") return stop.origin;
   const work = stop.work ?? [];
-  for (const w of pipeWorks) if (work.includes(w)) return w;
+  for (const w of pipeWorkOrder) if (work.includes(w)) return w;
   return "retained";
 }
 
 /** What happens to a stop in words: "New", "Existing: restored, revoiced", "Existing, kept as it is", "Extension (existing pipes)". */
 export function dispositionText(stop: DispositionLike): string {
-  const work = [...(stop.work ?? [])].sort((a, b) => pipeWorks.indexOf(a) - pipeWorks.indexOf(b)).map((w) => pipeWorkLabels[w].toLowerCase());
+  const work = [...(stop.work ?? [])].sort((a, b) => pipeWorkOrder.indexOf(a) - pipeWorkOrder.indexOf(b)).map((w) => pipeWorkLabels[w].toLowerCase());
   if (stop.origin === "existing") return work.length ? `Existing: ${work.join(", ")}` : "Existing, kept as it is";
   if (stop.origin === "extension" && stop.addedPipes === "existing") return `Extension (existing pipes${work.length ? `, ${work.join(", ")}` : ""})`;
   return originLabels[stop.origin];
@@ -257,8 +260,10 @@ export function formatTimeOfDay(iso: string): string {
   return d.toDateString() === new Date().toDateString() ? time : `${d.toLocaleDateString("en-GB", { day: "numeric", month: "short" })}, ${time}`;
 }
 
-export const originOrder = origins;
-export const findingOrder = findings;
+/** The scheme model's orders (`origins`, `findings`, `pipeWorks`), as the labels list them. */
+export const originOrder = Object.keys(originLabels) as Origin[];
+export const findingOrder = Object.keys(findingLabels) as Finding[];
+export const pipeWorkOrder = Object.keys(pipeWorkLabels) as PipeWork[];
 
 /** "Swell to Great", "Swell Octave", "Swell to Pedal Sub Octave": the trade's names for couplers. */
 export function couplerName(c: { from: string; to: string; octave: -1 | 0 | 1 }, divisions: readonly { id: string; name: string }[]): string {

@@ -1,13 +1,10 @@
 "use client";
-import { zodResolver } from "@hookform/resolvers/zod";
 import dynamic from "next/dynamic";
 import Link from "next/link";
 import { useCallback, useEffect, useMemo, useReducer, useState } from "react";
-import { useForm } from "react-hook-form";
-import type { z } from "zod";
 import { Dialog } from "@/components/ui/dialog";
 import { StateMark } from "@/components/ui/state-mark";
-import { schemeDocumentSchema, type SchemeDocument, type SchemeRead } from "@/lib/spec/document";
+import type { SchemeDocument, SchemeRead } from "@/lib/spec/document";
 import { DivisionBoard } from "./division-board";
 import { useColumnFigures } from "./board-figures";
 import { addDivision, addStop, findStop, moveStop, newId, removeDivision, removeStop, setAccessories, setWorks, updateDivision, updateStop } from "./doc-ops";
@@ -29,6 +26,8 @@ const WorksEditor = dynamic(() => import("./works-editor").then((m) => m.WorksEd
 const RevisionsPanel = dynamic(() => import("./revisions-panel").then((m) => m.RevisionsPanel));
 const StopForm = dynamic(() => import("./stop-form").then((m) => m.StopForm));
 const DivisionForm = dynamic(() => import("./division-form").then((m) => m.DivisionForm));
+// The scheme's details form brings zod and react-hook-form: loaded when opened, not with the board.
+const DetailsForm = dynamic(() => import("./scheme-details-form").then((m) => m.DetailsForm));
 const StopDetails = dynamic(() => import("./stop-details").then((m) => m.StopDetails));
 const StopFiles = dynamic(() => import("@/components/files/stop-files").then((m) => m.StopFiles));
 
@@ -42,33 +41,6 @@ type Editing =
 
 type Tab = "stops" | "scales" | "chests" | "accessories" | "works";
 
-const detailsSchema = schemeDocumentSchema.pick({ name: true, description: true });
-
-function DetailsForm({ doc, onSubmit, onCancel }: { doc: SchemeDocument; onSubmit: (v: z.output<typeof detailsSchema>) => void; onCancel: () => void }) {
-  const form = useForm<z.input<typeof detailsSchema>, unknown, z.output<typeof detailsSchema>>({
-    resolver: zodResolver(detailsSchema),
-    defaultValues: { name: doc.name, description: doc.description },
-  });
-  const err = form.formState.errors;
-  return (
-    <form onSubmit={form.handleSubmit(onSubmit)} noValidate className="space-y-3" aria-label="Scheme details">
-      <div>
-        <label className="label" htmlFor="scheme-doc-name">Name of the scheme</label>
-        <input id="scheme-doc-name" className="field" aria-invalid={!!err.name} {...form.register("name")} />
-        {err.name && <p className="field-error">✕ {err.name.message}</p>}
-      </div>
-      <div>
-        <label className="label" htmlFor="scheme-doc-description">Description</label>
-        <textarea id="scheme-doc-description" rows={4} className="field" {...form.register("description")} />
-        {err.description && <p className="field-error">✕ {err.description.message}</p>}
-      </div>
-      <div className="flex gap-2">
-        <button type="submit" className="btn-primary">Apply</button>
-        <button type="button" className="btn" onClick={onCancel}>Cancel</button>
-      </div>
-    </form>
-  );
-}
 
 export function SchemeEditor({
   initialScheme,

@@ -8,7 +8,7 @@
 import { useEffect, useRef, useState } from "react";
 import type { Estimate, Rates } from "@/lib/estimate";
 import type { SchemeDocument, Tuning } from "@/lib/spec/document";
-import { estimateDocument, type DrawingRules, type EstimateWithoutMoney } from "@/lib/spec/estimate";
+import type { DrawingRules, EstimateWithoutMoney } from "@/lib/spec/estimate";
 import type { WorkerAnswer, WorkerRequest } from "./estimate-messages";
 
 /** Live figures carry the whole estimate; figures computed on the server for a reader without money:read carry it without money. */
@@ -26,7 +26,9 @@ export type FigureState = { figures: Figures | null; stale: boolean };
 
 type Job = { doc: SchemeDocument; tuning: Tuning };
 
-function estimateHere(job: Job, rates: Rates): Figures {
+/** Only for a browser without workers: the estimator is loaded then, so the editor's first scripts leave it to the worker. */
+async function estimateHere(job: Job, rates: Rates): Promise<Figures> {
+  const { estimateDocument } = await import("@/lib/spec/estimate");
   const t0 = performance.now();
   const r = estimateDocument(job.doc, job.tuning, rates);
   return r.ok ? { ok: true, estimate: r.estimate, ms: performance.now() - t0 } : r;
@@ -111,7 +113,7 @@ export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSo
     if (w && s === 1 && primedJob && primedJob.doc === doc && primedJob.tuning.pitchHz === pitchHz && primedJob.tuning.temperatureC === temperatureC) return;
     if (!w) {
       // No worker in this browser: the same estimator, here.
-      setLive({ seq: s, figures: estimateHere(job, rates) });
+      void estimateHere(job, rates).then((figures) => setLive((cur) => (s > cur.seq ? { seq: s, figures } : cur)));
       return;
     }
     if (busy.current) next.current = { seq: s, job };
