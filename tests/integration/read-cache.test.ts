@@ -1,6 +1,7 @@
 // Scheme reads and estimates are kept per version in the server's memory; these tests prove a kept
 // answer is never served once it is out of date: after a save, a change of the project's tuning,
-// a revision restore, and for each role's view of money.
+// a revision restore, a new version of the rate set it is priced with, and for each role's view of money.
+import { randomUUID } from "node:crypto";
 import { afterAll, describe, expect, it } from "vitest";
 import { smallDocument } from "../support/fixtures";
 import { api, closeTestDb, makeUser, signIn } from "../support/server";
@@ -52,6 +53,30 @@ describe("cached scheme reads and estimates", () => {
     // Sharing changes the scheme row, not its version: the read shows it.
     expect((await api(path, { method: "PATCH", cookie: designer, body: { sharedWithClient: true, status: "proposed" } })).status).toBe(200);
     expect((await api(path, { cookie: designer })).json.scheme).toMatchObject({ version: 3, sharedWithClient: true, status: "proposed" });
+  });
+
+  it("follow a new version of the rate set they are priced with", async () => {
+    const designer = await signIn(await makeUser("designer"));
+    const estimator = await signIn(await makeUser("estimator"));
+    const project = (await api("/api/projects", { method: "POST", cookie: designer, body: { name: "Cache rates", clientName: "Invented guild" } })).json.project;
+    const scheme = (await api(`/api/projects/${project.id}/schemes`, { method: "POST", cookie: designer, body: { name: "A", document: smallDocument() } })).json.scheme;
+    // A set of this test's own (copied from the current one), named with ?rateSet=, so no other test's figures move.
+    const created = await api("/api/rate-sets", { method: "POST", cookie: estimator, body: { name: `Cache rates ${randomUUID().slice(0, 8)}` } });
+    expect(created.status).toBe(201);
+    const setId = created.json.rateSet.id;
+    const path = `/api/schemes/${scheme.id}/estimate?rateSet=${setId}`;
+    const before = (await api(path, { cookie: estimator })).json;
+    expect((await api(path, { cookie: estimator })).json).toEqual(before);
+    expect(before.estimate.money.totalAmount).toBe((await api(`/api/schemes/${scheme.id}/estimate`, { cookie: estimator })).json.estimate.money.totalAmount);
+
+    // Voicing dearer by half: a new version of the set, and the next estimate is priced with it.
+    const set = (await api(`/api/rate-sets/${setId}`, { cookie: estimator })).json;
+    const form = JSON.parse(JSON.stringify(set.current.rates, (_k, v) => (typeof v === "number" ? String(v) : v)));
+    form.hourlyRate.voicing = (Number(set.current.rates.hourlyRate.voicing) * 1.5).toFixed(2);
+    expect((await api(`/api/rate-sets/${setId}`, { method: "PUT", cookie: estimator, body: { version: 1, effectiveDate: "2028-01-01", note: "voicing up", rates: form } })).status).toBe(200);
+    const after = (await api(path, { cookie: estimator })).json;
+    expect(after.version).toBe(before.version);
+    expect(Number(after.estimate.money.totalAmount)).toBeGreaterThan(Number(before.estimate.money.totalAmount));
   });
 
   it("keep money out of the estimate for roles without it, whoever asked first", async () => {
