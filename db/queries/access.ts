@@ -1,5 +1,6 @@
 import "server-only";
 import { and, eq, sql } from "drizzle-orm";
+import type { SelectedFields } from "drizzle-orm/pg-core";
 import { db } from "@/db/client";
 import type { Store } from "@/db/scheme-store";
 import { projectMembers, projects, schemes, users, type Project, type Scheme } from "@/db/schema";
@@ -53,7 +54,7 @@ export type SchemeHead = Pick<Scheme, "id" | "projectId" | "name" | "description
  */
 // Prepared once (it runs on every scheme and estimate read); the membership test is cheap and only
 // consulted for clients.
-export const schemeHeadColumns = {
+const schemeHeadColumns = {
   id: schemes.id,
   projectId: schemes.projectId,
   name: schemes.name,
@@ -68,14 +69,18 @@ export const schemeHeadColumns = {
   temperatureC: projects.temperatureC,
   member: sql<boolean>`exists (select 1 from ${projectMembers} where ${projectMembers.projectId} = ${projects.id} and ${projectMembers.userId} = ${sql.placeholder("userId")})`,
 };
-const schemeHeadQuery = db
-  .select(schemeHeadColumns)
-  .from(schemes)
-  .innerJoin(projects, eq(projects.id, schemes.projectId))
-  .leftJoin(users, eq(users.id, schemes.updatedById))
-  .where(eq(schemes.id, sql.placeholder("schemeId")))
-  .limit(1)
-  .prepare("scheme_head");
+/** The scheme-head query, with columns of its own beside the head's (the estimate adds its rate-set version). */
+export function prepareSchemeHead<E extends SelectedFields>(name: string, extra: E) {
+  return db
+    .select({ ...schemeHeadColumns, ...extra })
+    .from(schemes)
+    .innerJoin(projects, eq(projects.id, schemes.projectId))
+    .leftJoin(users, eq(users.id, schemes.updatedById))
+    .where(eq(schemes.id, sql.placeholder("schemeId")))
+    .limit(1)
+    .prepare(name);
+}
+const schemeHeadQuery = prepareSchemeHead("scheme_head", {});
 /** The head of a scheme this user may see (a client: only shared schemes of their projects), or 404. */
 export function admitSchemeHead<R extends { member: boolean; sharedWithClient: boolean }>(user: SessionUser, row: R | undefined): Omit<R, "member"> {
   if (!row || (user.role === "client" && !(row.member && row.sharedWithClient))) throw new AppError("not_found", "No such scheme.");

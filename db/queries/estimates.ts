@@ -1,14 +1,14 @@
 import "server-only";
-import { and, eq, sql } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { projects, schemeRevisions, schemes, users } from "@/db/schema";
+import { schemeRevisions } from "@/db/schema";
 import { can } from "@/lib/roles";
 import { AppError } from "@/lib/server/errors";
 import type { SessionUser } from "@/lib/server/guard";
 import { cached, readCache } from "@/lib/server/read-cache";
 import { schemeDocumentSchema, type SchemeDocument } from "@/lib/spec/document";
 import { estimateDocument, withoutMoney } from "@/lib/spec/estimate";
-import { admitSchemeHead, isUuid, schemeHeadColumns, type SchemeHead } from "./access";
+import { admitSchemeHead, isUuid, prepareSchemeHead, type SchemeHead } from "./access";
 import { currentPricingVersionId, getPricingRates, getRatesOfVersion } from "./rate-sets";
 
 /** The document of exactly this version: from the read cache, or from its revision snapshot. */
@@ -26,14 +26,7 @@ async function documentOf(head: SchemeHead): Promise<SchemeDocument> {
 
 // loadSchemeHeadFor's row and rule and, in the same round trip, the id of the rate-set version the
 // firm prices with now (null: no rate book yet). Prepared once: it runs on every estimate read.
-const schemeHeadPricedQuery = db
-  .select({ ...schemeHeadColumns, pricingVersionId: currentPricingVersionId })
-  .from(schemes)
-  .innerJoin(projects, eq(projects.id, schemes.projectId))
-  .leftJoin(users, eq(users.id, schemes.updatedById))
-  .where(eq(schemes.id, sql.placeholder("schemeId")))
-  .limit(1)
-  .prepare("scheme_head_priced");
+const schemeHeadPricedQuery = prepareSchemeHead("scheme_head_priced", { pricingVersionId: currentPricingVersionId });
 
 async function loadSchemeHeadPricedFor({ user, schemeId }: { user: SessionUser; schemeId: string }): Promise<SchemeHead & { pricingVersionId: string | null }> {
   if (!isUuid(schemeId)) throw new AppError("not_found", "No such scheme.");
