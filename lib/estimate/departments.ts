@@ -74,17 +74,29 @@ export function nominalLengthMm(semitonesAbove8ftC: number, lengthFraction: numb
   return FT8_MM * lengthFraction * Math.pow(2, -semitonesAbove8ftC / 12);
 }
 
+/** 12·log2 of each class bound: nominal lengths compared as semitones. */
+const BOUND_SEMITONES = SIZE_CLASS_BOUNDS_MM.map((b) => 12 * Math.log2(b));
+
+/**
+ * How many of `count` pipes are longer than size-class bound c (SIZE_CLASS_BOUNDS_MM[c]), when the
+ * first pipe's nominal length is 2^(firstSemitones/12) mm and each next one a semitone shorter:
+ * pipe i is longer while i < firstSemitones − 12·log2(bound). O(1), no stepping.
+ */
+export function pipesLongerThanBound(firstSemitones: number, c: number, count: number): number {
+  const x = firstSemitones - BOUND_SEMITONES[c];
+  return x <= 0 ? 0 : Math.min(count, Math.ceil(x));
+}
+
 /**
  * How many of `count` pipes, whose nominal length starts at `firstMm` and shrinks a semitone at a
  * time, fall in each size class: writes five counts into out[at … at+4]. O(1) per run of pipes
- * (the boundaries are found with logarithms, not pipe by pipe).
+ * (the boundaries are found with one logarithm, not pipe by pipe).
  */
 export function splitBySizeClass(firstMm: number, count: number, out: Float64Array, at: number): void {
+  const first = 12 * Math.log2(firstMm);
   let done = 0;
   for (let c = 0; c < 4; c++) {
-    // Pipe i is longer than the bound while i < 12·log2(first/bound).
-    const x = 12 * Math.log2(firstMm / SIZE_CLASS_BOUNDS_MM[c]);
-    const upTo = x <= 0 ? 0 : Math.min(count, Math.ceil(x));
+    const upTo = pipesLongerThanBound(first, c, count);
     if (upTo > done) {
       out[at + c] += upTo - done;
       done = upTo;

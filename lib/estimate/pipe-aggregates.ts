@@ -11,7 +11,7 @@ import type { Rates } from "./rates";
 import { MIN_LENGTH_FRACTION, speedOfSoundMPerS } from "./acoustics";
 import { NORMAL_SCALE_8FT_C_MM, SQUARE_SIDE_PER_DIAMETER } from "./scale";
 import { REFERENCE_DIAMETER_MM, REFERENCE_SIDE_MM, MATERIAL_INDEX, ALL_MATERIALS } from "./materials";
-import { FT8_MM, SIZE_CLASS_BOUNDS_MM, sizeClassIndex, sizeClasses } from "./departments";
+import { FT8_MM, pipesLongerThanBound, sizeClassIndex, sizeClasses, splitBySizeClass } from "./departments";
 import { formGeometry, jetSpeedMPerS, REFERENCE_MOUTH_MM, type FormGeometry } from "./geometry";
 import { EXISTING, PREPARED, type SchemePlan } from "./pipes";
 import { windPressureMm } from "./units";
@@ -71,12 +71,11 @@ const EXP2_33 = Math.pow(2, 33 / 12);
 const MIN_LF = MIN_LENGTH_FRACTION;
 const SQ_SIDE = SQUARE_SIDE_PER_DIAMETER;
 const PI = Math.PI;
-const BOUNDS = SIZE_CLASS_BOUNDS_MM;
 const classOf = sizeClassIndex;
 const FT8 = FT8_MM;
 const D_8FT_C = NORMAL_SCALE_8FT_C_MM;
-const REF_SIDE = REFERENCE_SIDE_MM;
-const REF_DIAMETER = REFERENCE_DIAMETER_MM;
+const LN_SQ_PER_REF_SIDE = Math.log(SQUARE_SIDE_PER_DIAMETER / REFERENCE_SIDE_MM);
+const LN_REF_DIAMETER = Math.log(REFERENCE_DIAMETER_MM);
 const MATERIAL_INDEX_ = MATERIAL_INDEX;
 const EXISTING_ = EXISTING;
 const PREPARED_ = PREPARED;
@@ -132,20 +131,23 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
   const { maxLengthMm, maxDiameterMm, minFrequencyHz, maxFrequencyHz, windM3s, windPipes, positions, offsetPipes, tallestMm } = out;
 
   // Per form, the values at its reference note and their logarithmic steps: a run of pipes then costs
-  // three exponentials to start, and a multiply per pipe for each quantity.
+  // three exponentials to start, and a multiply per pipe for each quantity. Powers are taken as
+  // exponentials of logarithms (Math.pow costs several times Math.exp), from ln D at the reference.
   const runs = plan.forms.map((form, i) => {
     const g = forms[i];
+    // By pow, so a whole number of halvings gives the exact diameter (77.75 mm is half of 155.5 mm, and rounds up).
     const dRef = D_8FT_C * Math.pow(2, -(g.referenceSemitones - g.deviationHt) / 16);
-    const lnRatio = Math.log(g.ratio);
+    const lnDRef = Math.log(dRef);
+    const lnRatio = -Math.LN2 / (g.halvingOn - 1); // ln of diameterRatioPerSemitone
     const tExp = g.wood ? wp.boardExponent : pm.thicknessExponent;
     const tRef = g.wood
-      ? wp.boardAt8ftCMm * Math.pow((dRef * SQ_SIDE) / REF_SIDE, wp.boardExponent)
-      : pm.thicknessAt8ftCMm * g.thicknessFactor * Math.pow(dRef / REF_DIAMETER, pm.thicknessExponent);
+      ? wp.boardAt8ftCMm * Math.exp(wp.boardExponent * (lnDRef + LN_SQ_PER_REF_SIDE))
+      : pm.thicknessAt8ftCMm * g.thicknessFactor * Math.exp(pm.thicknessExponent * (lnDRef - LN_REF_DIAMETER));
     // Wind ∝ W^(1+e): a reed's by the mouth of a normal-width round pipe of its diameter.
     const mouthPerD = g.wood && !form.reed ? SQ_SIDE : (form.reed ? 0.25 : g.mouthWidthFraction) * PI;
     return {
-      g, dRef, lnRatio, tRef, tExp, tRatio: Math.pow(g.ratio, tExp), tMin: g.wood ? wp.minimumBoardMm : pm.minimumThicknessMm,
-      qRef: g.windPerMouth * flowPerPa * Math.pow(mouthPerD * dRef, 1 + windExp), qRatio: Math.pow(g.ratio, 1 + windExp),
+      g, dRef, lnRatio, tRef, tExp, tRatio: Math.exp(lnRatio * tExp), tMin: g.wood ? wp.minimumBoardMm : pm.minimumThicknessMm,
+      qRef: g.windPerMouth * flowPerPa * Math.exp((1 + windExp) * (Math.log(mouthPerD) + lnDRef)), qRatio: Math.exp(lnRatio * (1 + windExp)),
       kind: form.reed ? (g.wood ? WOOD_REED : METAL_REED) : g.wood ? WOOD_FLUE : METAL_FLUE,
       material: MATERIAL_INDEX_[form.material], reed: form.reed,
     };
@@ -177,10 +179,8 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
     const k = g.correctionPerDiameter;
     const areaF = g.areaFactor;
     // The trade's size class goes by nominal length (8′ C open = 8 ft), not by the corrected speaking length.
-    let body = FT8 * g.lengthFraction * octaves;
-    let pitch = FT8 * octaves;
-    let cls = classOf(body);
-    let pcls = classOf(pitch);
+    const body = FT8 * g.lengthFraction * octaves;
+    const pitch = FT8 * octaves;
     let nominal = (1000 * c) / g.divisor / f0; // c / (divisor · f) in mm
     const solid = g.solidPerA3;
     const capH = g.capHeightPerA;
@@ -198,59 +198,48 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
     const foot0 = wood ? d * SQ_SIDE + 2 * (t > tMin ? t : tMin) : d;
     let footAtMain = 0;
     let diaAtMain = 0;
-    // Pipes per size class are counted as runs: the class changes at most four times along a
-    // segment, so the counts are written when it changes, not once per pipe.
-    let clsFrom = 0;
-    let pclsFrom = 0;
-    for (let i = 0; i < n; i++) {
-      let len = nominal - k * d;
-      const shortest = nominal * MIN_LF;
-      if (len < shortest) len = shortest;
-      const th = t > tMin ? t : tMin;
-      let footprint: number;
-      if (wood) {
-        const a = d * SQ_SIDE;
-        footprint = a + 2 * th;
-        vol += 4 * th * (a + th) * len * areaF + solid * a * a * a + capH * a * (a + 2 * th) * th;
-      } else {
-        footprint = d;
-        vol += (PI * d * (len * areaF + 0.5 * foot[cls]) + top * d * d) * th;
-      }
-      const wdt = rowWidth(footprint, d, chestNorms);
-      if (i < offN) offSide += wdt;
-      else {
-        if (i === offN) {
-          footAtMain = footprint;
-          diaAtMain = d;
+    // Size classes change at most four times along a run: the pipes go in pieces of one class
+    // (one foot length), counted by logarithms as splitBySizeClass does, not pipe by pipe.
+    const bodyTop = 12 * Math.log2(body);
+    let i = 0;
+    for (let cls = 0; cls <= 4; cls++) {
+      const end = cls < 4 ? pipesLongerThanBound(bodyTop, cls, n) : n;
+      if (end <= i) continue;
+      if (made) bodyCounts[bodyBase + cls] += end - i;
+      const halfFoot = 0.5 * foot[cls];
+      for (; i < end; i++) {
+        let len = nominal - k * d;
+        const shortest = nominal * MIN_LF;
+        if (len < shortest) len = shortest;
+        const th = t > tMin ? t : tMin;
+        let footprint: number;
+        if (wood) {
+          const a = d * SQ_SIDE;
+          footprint = a + 2 * th;
+          vol += 4 * th * (a + th) * len * areaF + solid * a * a * a + capH * a * (a + 2 * th) * th;
+        } else {
+          footprint = d;
+          vol += (PI * d * (len * areaF + halfFoot) + top * d * d) * th;
         }
-        if (odd === 0) cSide += wdt;
-        else csSide += wdt;
-      }
-      wind += q;
-      odd ^= 1;
-      nominal *= INV_SEMITONE;
-      d *= ratio;
-      t *= tRatio;
-      q *= qRatio;
-      body *= INV_SEMITONE;
-      pitch *= INV_SEMITONE;
-      if (cls < 4 && body <= BOUNDS[cls]) {
-        if (made) bodyCounts[bodyBase + cls] += i + 1 - clsFrom;
-        clsFrom = i + 1;
-        do cls++;
-        while (cls < 4 && body <= BOUNDS[cls]);
-      }
-      if (pcls < 4 && pitch <= BOUNDS[pcls]) {
-        if (made) pitchCounts[pitchBase + pcls] += i + 1 - pclsFrom;
-        pclsFrom = i + 1;
-        do pcls++;
-        while (pcls < 4 && pitch <= BOUNDS[pcls]);
+        const wdt = rowWidth(footprint, d, chestNorms);
+        if (i < offN) offSide += wdt;
+        else {
+          if (i === offN) {
+            footAtMain = footprint;
+            diaAtMain = d;
+          }
+          if (odd === 0) cSide += wdt;
+          else csSide += wdt;
+        }
+        wind += q;
+        odd ^= 1;
+        nominal *= INV_SEMITONE;
+        d *= ratio;
+        t *= tRatio;
+        q *= qRatio;
       }
     }
-    if (made) {
-      bodyCounts[bodyBase + cls] += n - clsFrom;
-      pitchCounts[pitchBase + pcls] += n - pclsFrom;
-    }
+    if (made) splitBySizeClass(pitch, n, pitchCounts, pitchBase);
     // Pipes get smaller up a run, so its first pipe (on each chest) is its largest and longest.
     rowC[row] += cSide;
     rowCs[row] += csSide;
