@@ -90,13 +90,17 @@ export function pipesLongerThanBound(firstSemitones: number, c: number, count: n
 /**
  * How many of `count` pipes, whose nominal length starts at `firstMm` and shrinks a semitone at a
  * time, fall in each size class: writes five counts into out[at … at+4]. O(1) per run of pipes
- * (the boundaries are found with one logarithm, not pipe by pipe).
+ * (the boundaries are found with a logarithm, not pipe by pipe).
  */
 export function splitBySizeClass(firstMm: number, count: number, out: Float64Array, at: number): void {
-  const first = 12 * Math.log2(firstMm);
+  splitBySizeClassFrom(12 * Math.log2(firstMm), count, out, at);
+}
+
+/** splitBySizeClass for a first pipe given as 12·log2(its nominal length in mm). */
+export function splitBySizeClassFrom(firstSemitones: number, count: number, out: Float64Array, at: number): void {
   let done = 0;
   for (let c = 0; c < 4; c++) {
-    const upTo = pipesLongerThanBound(first, c, count);
+    const upTo = pipesLongerThanBound(firstSemitones, c, count);
     if (upTo > done) {
       out[at + c] += upTo - done;
       done = upTo;

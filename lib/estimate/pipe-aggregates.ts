@@ -11,7 +11,7 @@ import type { Rates } from "./rates";
 import { MIN_LENGTH_FRACTION, speedOfSoundMPerS } from "./acoustics";
 import { NORMAL_SCALE_8FT_C_MM, SQUARE_SIDE_PER_DIAMETER } from "./scale";
 import { REFERENCE_DIAMETER_MM, REFERENCE_SIDE_MM, MATERIAL_INDEX, ALL_MATERIALS } from "./materials";
-import { FT8_MM, pipesLongerThanBound, sizeClassIndex, sizeClasses, splitBySizeClass } from "./departments";
+import { FT8_MM, pipesLongerThanBound, sizeClassIndex, sizeClasses, splitBySizeClassFrom } from "./departments";
 import { formGeometry, jetSpeedMPerS, REFERENCE_MOUTH_MM, type FormGeometry } from "./geometry";
 import { EXISTING, PREPARED, type SchemePlan } from "./pipes";
 import { windPressureMm } from "./units";
@@ -73,6 +73,7 @@ const SQ_SIDE = SQUARE_SIDE_PER_DIAMETER;
 const PI = Math.PI;
 const classOf = sizeClassIndex;
 const FT8 = FT8_MM;
+const SEMITONES_8FT = 12 * Math.log2(FT8_MM);
 const D_8FT_C = NORMAL_SCALE_8FT_C_MM;
 const LN_SQ_PER_REF_SIDE = Math.log(SQUARE_SIDE_PER_DIAMETER / REFERENCE_SIDE_MM);
 const LN_REF_DIAMETER = Math.log(REFERENCE_DIAMETER_MM);
@@ -99,28 +100,32 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
   const flowPerPa = w.dischargeCoefficient * w.windwayAt8ftCMm * 1e-6 / Math.pow(REFERENCE_MOUTH_MM, w.windwayExponent);
   const pressures = plan.divisions.map((d) => windPressureMm(d.division.windPressure));
 
+  // All the sums in one zeroed buffer: one allocation per estimate instead of twenty-one.
+  const buffer = new Float64Array(nStops * (BODY_STRIDE + PITCH_STRIDE + MATERIAL_STRIDE + 6) + nRows * 7 + nDiv * 3);
+  let used = 0;
+  const take = (length: number) => buffer.subarray(used, (used += length));
   const out: PipeAggregates = {
     forms,
     speedOfSoundMPerS: c,
-    bodyCounts: new Float64Array(nStops * BODY_STRIDE),
-    pitchCounts: new Float64Array(nStops * PITCH_STRIDE),
-    materials: new Float64Array(nStops * MATERIAL_STRIDE),
-    maxLengthMm: new Float64Array(nStops),
-    maxDiameterMm: new Float64Array(nStops),
-    minFrequencyHz: new Float64Array(nStops).fill(Infinity),
-    maxFrequencyHz: new Float64Array(nStops),
-    windM3s: new Float64Array(nStops),
-    windPipes: new Float64Array(nStops),
-    rowC: new Float64Array(nRows),
-    rowCs: new Float64Array(nRows),
-    rowFoot: new Float64Array(nRows),
-    rowDia: new Float64Array(nRows),
-    offSum: new Float64Array(nRows),
-    offFoot: new Float64Array(nRows),
-    offDia: new Float64Array(nRows),
-    positions: new Float64Array(nDiv),
-    offsetPipes: new Float64Array(nDiv),
-    tallestMm: new Float64Array(nDiv),
+    bodyCounts: take(nStops * BODY_STRIDE),
+    pitchCounts: take(nStops * PITCH_STRIDE),
+    materials: take(nStops * MATERIAL_STRIDE),
+    maxLengthMm: take(nStops),
+    maxDiameterMm: take(nStops),
+    minFrequencyHz: take(nStops).fill(Infinity),
+    maxFrequencyHz: take(nStops),
+    windM3s: take(nStops),
+    windPipes: take(nStops),
+    rowC: take(nRows),
+    rowCs: take(nRows),
+    rowFoot: take(nRows),
+    rowDia: take(nRows),
+    offSum: take(nRows),
+    offFoot: take(nRows),
+    offDia: take(nRows),
+    positions: take(nDiv),
+    offsetPipes: take(nDiv),
+    tallestMm: take(nDiv),
   };
   const { bodyCounts, pitchCounts, materials, rowC, rowCs, rowFoot, rowDia, offSum, offFoot, offDia } = out;
 
@@ -148,6 +153,7 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
     return {
       g, dRef, lnRatio, tRef, tExp, tRatio: Math.exp(lnRatio * tExp), tMin: g.wood ? wp.minimumBoardMm : pm.minimumThicknessMm,
       qRef: g.windPerMouth * flowPerPa * Math.exp((1 + windExp) * (Math.log(mouthPerD) + lnDRef)), qRatio: Math.exp(lnRatio * (1 + windExp)),
+      lengthSemitones: 12 * Math.log2(g.lengthFraction),
       kind: form.reed ? (g.wood ? WOOD_REED : METAL_REED) : g.wood ? WOOD_FLUE : METAL_FLUE,
       material: MATERIAL_INDEX_[form.material], reed: form.reed,
     };
@@ -179,8 +185,9 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
     const k = g.correctionPerDiameter;
     const areaF = g.areaFactor;
     // The trade's size class goes by nominal length (8′ C open = 8 ft), not by the corrected speaking length.
-    const body = FT8 * g.lengthFraction * octaves;
-    const pitch = FT8 * octaves;
+    // As 12·log2(mm) for the class bounds: 12·log2(8 ft) − s0, plus 12·log2 of the form's length fraction.
+    const pitchTop = SEMITONES_8FT - s0;
+    const bodyTop = pitchTop + run.lengthSemitones;
     let nominal = (1000 * c) / g.divisor / f0; // c / (divisor · f) in mm
     const solid = g.solidPerA3;
     const capH = g.capHeightPerA;
@@ -200,7 +207,6 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
     let diaAtMain = 0;
     // Size classes change at most four times along a run: the pipes go in pieces of one class
     // (one foot length), counted by logarithms as splitBySizeClass does, not pipe by pipe.
-    const bodyTop = 12 * Math.log2(body);
     let i = 0;
     for (let cls = 0; cls <= 4; cls++) {
       const end = cls < 4 ? pipesLongerThanBound(bodyTop, cls, n) : n;
@@ -239,7 +245,7 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
         q *= qRatio;
       }
     }
-    if (made) splitBySizeClass(pitch, n, pitchCounts, pitchBase);
+    if (made) splitBySizeClassFrom(pitchTop, n, pitchCounts, pitchBase);
     // Pipes get smaller up a run, so its first pipe (on each chest) is its largest and longest.
     rowC[row] += cSide;
     rowCs[row] += csSide;

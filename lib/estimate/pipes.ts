@@ -165,6 +165,9 @@ const compassOf = (c: { readonly low: string; readonly high: string }) => {
   return lowMidi === null || highMidi === null ? null : { lowMidi, highMidi };
 };
 
+/** A key where a run splits, if it lies above key a; else none (Infinity). */
+const cutAbove = (a: number, cut: number) => (cut > a ? cut : Infinity);
+
 /** Occupancy of sounding semitones (index = semitones above 8′ C + OCC_BASE) for ranks that carry extensions. */
 const OCC_BASE = 96;
 const OCC_SIZE = 256;
@@ -330,17 +333,11 @@ export function planScheme(scheme: Scheme): SchemePlan {
         const from = run.fromKey;
         const to = k + 1 < runs.length ? runs[k + 1].fromKey - 1 : d.highKey;
         if (to < from || !run.footage) continue; // empty, or a progressive rank silent in this range
-        // Split the run where the form or the state changes: basses, flue top, re-scaled ends.
-        const cuts = [from, to + 1];
-        if (bassEnd > from && bassEnd <= to) cuts.push(bassEnd);
-        if (flueFrom > from && flueFrom <= to) cuts.push(flueFrom);
-        if (newBelow > from && newBelow <= to) cuts.push(newBelow);
-        if (newAbove + 1 > from && newAbove + 1 <= to) cuts.push(newAbove + 1);
-        if (cuts.length > 2) cuts.sort((a, b) => a - b);
-        for (let c = 0; c + 1 < cuts.length; c++) {
-          const a = cuts[c];
-          const count = cuts[c + 1] - a;
-          if (count <= 0) continue;
+        // Split the run where the form or the state changes: basses, flue top, re-scaled ends
+        // (each piece ends at the nearest of them above its start; no array to sort per run).
+        for (let a = from, b: number; a <= to; a = b) {
+          b = Math.min(to + 1, cutAbove(a, bassEnd), cutAbove(a, flueFrom), cutAbove(a, newBelow), cutAbove(a, newAbove + 1));
+          const count = b - a;
           const isNew = status === EXISTING && (a < newBelow || a > newAbove);
           const form = a < bassEnd ? d.forms[1] : a >= flueFrom ? d.forms[d.forms.length - 1] : d.forms[0];
           segments.push({
