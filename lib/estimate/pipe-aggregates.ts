@@ -159,6 +159,11 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
     };
   });
 
+  // Module constants as locals: the per-pipe loop reads them without a context load each time.
+  const minLf = MIN_LF;
+  const sqSide = SQ_SIDE;
+  const pi = PI;
+  const invSemitone = INV_SEMITONE;
   for (let sIndex = 0; sIndex < segments.length; sIndex++) {
     const seg = segments[sIndex];
     const run = runs[seg.form];
@@ -213,36 +218,39 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
       if (end <= i) continue;
       if (made) bodyCounts[bodyBase + cls] += end - i;
       const halfFoot = 0.5 * foot[cls];
-      for (; i < end; i++) {
-        let len = nominal - k * d;
-        const shortest = nominal * MIN_LF;
-        if (len < shortest) len = shortest;
-        const th = t > tMin ? t : tMin;
-        let footprint: number;
-        if (wood) {
-          const a = d * SQ_SIDE;
-          footprint = a + 2 * th;
-          vol += 4 * th * (a + th) * len * areaF + solid * a * a * a + capH * a * (a + 2 * th) * th;
-        } else {
-          footprint = d;
-          vol += (PI * d * (len * areaF + halfFoot) + top * d * d) * th;
+      // Stretches on the offset chest and on the main chest, so no pipe asks which chest it stands on.
+      while (i < end) {
+        const onOffset = i < offN;
+        const stretchEnd = onOffset && offN < end ? offN : end;
+        if (i === offN) {
+          footAtMain = wood ? d * SQ_SIDE + 2 * (t > tMin ? t : tMin) : d;
+          diaAtMain = d;
         }
-        const wdt = rowWidth(footprint, d, chestNorms);
-        if (i < offN) offSide += wdt;
-        else {
-          if (i === offN) {
-            footAtMain = footprint;
-            diaAtMain = d;
+        for (; i < stretchEnd; i++) {
+          let len = nominal - k * d;
+          const shortest = nominal * minLf;
+          if (len < shortest) len = shortest;
+          const th = t > tMin ? t : tMin;
+          let footprint: number;
+          if (wood) {
+            const a = d * sqSide;
+            footprint = a + 2 * th;
+            vol += 4 * th * (a + th) * len * areaF + solid * a * a * a + capH * a * (a + 2 * th) * th;
+          } else {
+            footprint = d;
+            vol += (pi * d * (len * areaF + halfFoot) + top * d * d) * th;
           }
-          if (odd === 0) cSide += wdt;
+          const wdt = rowWidth(footprint, d, chestNorms);
+          if (onOffset) offSide += wdt;
+          else if (odd === 0) cSide += wdt;
           else csSide += wdt;
+          wind += q;
+          odd ^= 1;
+          nominal *= invSemitone;
+          d *= ratio;
+          t *= tRatio;
+          q *= qRatio;
         }
-        wind += q;
-        odd ^= 1;
-        nominal *= INV_SEMITONE;
-        d *= ratio;
-        t *= tRatio;
-        q *= qRatio;
       }
     }
     if (made) splitBySizeClassFrom(pitchTop, n, pitchCounts, pitchBase);
