@@ -2,7 +2,8 @@
  * The per-pipe stage: one tight loop over every pipe of the plan, summing what later stages need —
  * pipes per size class, finished metal and timber per stop, longest and widest pipes, wind, and the
  * chest rows. Frequency, diameter, sheet and board thickness and wind step by constant ratios along
- * a run of pipes, so there is no pow per pipe, no object per pipe and no decimal arithmetic.
+ * a run of pipes, so there is no pow per pipe, no object per pipe and no decimal arithmetic; a run
+ * goes in pieces of one size class (bounds found by logarithms) and one chest, so the loop tests neither.
  * `pipesOfStop` (geometry.ts) computes the same pipes one by one from the plain formulas; the tests
  * hold the two equal.
  */
