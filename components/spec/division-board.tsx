@@ -279,6 +279,10 @@ export const DivisionBoard = memo(function DivisionBoard({
   // One object per carried item, not per step, so the cards re-render only when it changes.
   const carried = useMemo<Carried | null>(() => (carriedType && carriedId ? { type: carriedType, id: carriedId } : null), [carriedType, carriedId]);
   const activeType = drag?.type ?? null;
+  // The same list while the order of divisions is the same: a move of a stop makes a new divisions
+  // array, which would otherwise make every column's sortable hook run again on the drop.
+  const divisionOrder = shown.divisions.map((d) => d.id).join("\n");
+  const sortableIds = useMemo(() => (divisionOrder ? divisionOrder.split("\n").map((id) => `div:${id}`) : []), [divisionOrder]);
 
   return (
     <DndContext
@@ -299,7 +303,7 @@ export const DivisionBoard = memo(function DivisionBoard({
       <p className="sr-only" aria-live="assertive" data-testid="carry-status">{spoken}</p>
       <DivisionPicker divisions={shown.divisions} columnFigures={columnFigures} picked={pickedId} onPick={setPicked} boardRef={boardRef} />
       <CarryContext.Provider value={carried}>
-      <SortableContext items={shown.divisions.map((d) => `div:${d.id}`)} strategy={horizontalListSortingStrategy}>
+      <SortableContext items={sortableIds} strategy={horizontalListSortingStrategy}>
         <div
           ref={boardRef}
           onKeyDown={onBoardKeyDown}

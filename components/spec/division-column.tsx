@@ -84,7 +84,7 @@ export const DivisionColumn = memo(function DivisionColumn({
     >
       <header className="border-b border-tin-rule px-2.5 pb-2 pt-2">
         <div className="flex items-center gap-1.5">
-          {editable && <DragHandle label={`Move division ${division.name}`} carry={{ type: "division", id: division.id }} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />}
+          {editable && <DragHandle label={`Move division ${division.name}`} carryType="division" carryId={division.id} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />}
           <h3 id={`div-title-${division.id}`} className="min-w-0 flex-1 truncate text-lg font-semibold" title={division.name}>{division.name}</h3>
           {editable && (
             <button type="button" className="btn px-2 py-0.5 text-xs" onClick={() => onEditDivision(division.id)} aria-label={`Edit division ${division.name}`}>

@@ -7,9 +7,12 @@
 import type { Rates } from "@/lib/estimate";
 import type { SchemeDocument, Tuning } from "@/lib/spec/document";
 import { estimateDocument } from "@/lib/spec/estimate";
+import { applyPatch } from "./doc-patch";
 import type { WorkerAnswer, WorkerRequest } from "./estimate-messages";
 
 let rates: Rates | null = null;
+/** The last document sent: the next may come as a patch on it. */
+let held: SchemeDocument | null = null;
 
 self.onmessage = (e: MessageEvent<WorkerRequest>) => {
   const msg = e.data;
@@ -17,8 +20,16 @@ self.onmessage = (e: MessageEvent<WorkerRequest>) => {
     rates = msg.rates;
     return;
   }
+  try {
+    held = "doc" in msg ? msg.doc : applyPatch(held!, msg.patch);
+  } catch (err) {
+    held = null;
+    const answer: WorkerAnswer = { seq: msg.seq, result: { ok: false, messages: [`The figures could not be worked out: ${err instanceof Error ? err.message : String(err)}`] }, ms: 0 };
+    (self as unknown as Worker).postMessage(answer);
+    return;
+  }
   if (!rates) return;
-  const answer: WorkerAnswer = { seq: msg.seq, ...estimate(msg.doc, msg.tuning, rates) };
+  const answer: WorkerAnswer = { seq: msg.seq, ...estimate(held, msg.tuning, rates) };
   (self as unknown as Worker).postMessage(answer);
 };
 

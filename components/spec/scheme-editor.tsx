@@ -67,7 +67,7 @@ export function SchemeEditor({
   const doc = history.present;
   const save = useSchemeSave({ scheme: initialScheme, present: doc, label: history.label, enabled: editable });
   const { saveNow } = save;
-  const { figures, stale } = useFigures(doc, initialScheme.tuning, figureSource);
+  const { figures, stale, ahead } = useFigures(doc, initialScheme.tuning, figureSource);
   const columnFigures = useColumnFigures(figures);
   const [figuresOpen, setFiguresOpen] = useState(false);
   const [tab, setTab] = useState<Tab>("stops");
@@ -103,10 +103,15 @@ export function SchemeEditor({
     setDraft(null);
   }
 
-  const edit = useCallback((next: SchemeDocument, label: string) => {
-    dispatch({ type: "edit", doc: next, label });
-    setNotice(label);
-  }, []);
+  const edit = useCallback(
+    (next: SchemeDocument, label: string) => {
+      // The worker starts on the new figures while React draws the edit.
+      ahead(next);
+      dispatch({ type: "edit", doc: next, label });
+      setNotice(label);
+    },
+    [ahead],
+  );
   // Undo and redo say what they took back or put again (the history's label); other notices clear.
   const undo = useCallback(() => {
     dispatch({ type: "undo" });
@@ -160,11 +165,14 @@ export function SchemeEditor({
     setNotice(`Loaded version ${current.version}. Undo brings your version back.`);
   }
 
+  // Only the stop dialogs list the other stops: not worked out again for every move on the board.
+  const dialogOpen = editing?.kind === "stop" || editing?.kind === "view";
   const sources = useMemo(() => {
     const out: { id: string; label: string }[] = [];
+    if (!dialogOpen) return out;
     for (const d of doc.divisions) for (const s of d.stops) out.push({ id: s.id, label: `${d.name}: ${stopTitle(s)}` });
     return out;
-  }, [doc]);
+  }, [doc, dialogOpen]);
 
   const editingStop = editing?.kind === "stop" && editing.stopId ? findStop(doc, editing.stopId) : null;
   const viewingStop = editing?.kind === "view" ? findStop(doc, editing.stopId) : null;

@@ -18,16 +18,22 @@ const gripDots = (
   </svg>
 );
 
-/** The grip of a stop or a division: the pointer drags it (dnd-kit), the keyboard carries it (division-board.tsx). */
-export function DragHandle({
+/**
+ * The grip of a stop or a division: the pointer drags it (dnd-kit), the keyboard carries it
+ * (division-board.tsx). Memoised on primitive props: when a drag starts or ends every grip's
+ * dnd-kit hook runs again, but a grip whose props are the same draws nothing again.
+ */
+export const DragHandle = memo(function DragHandle({
   label,
-  carry,
+  carryType,
+  carryId,
   listeners,
   attributes,
   setRef,
 }: {
   label: string;
-  carry: { type: "stop" | "division"; id: string };
+  carryType: "stop" | "division";
+  carryId: string;
   listeners?: object;
   attributes?: object;
   setRef?: (el: HTMLElement | null) => void;
@@ -40,13 +46,13 @@ export function DragHandle({
       className="-my-1 cursor-grab touch-none rounded px-1 py-1 text-tin hover:bg-paper-deep hover:text-ink active:cursor-grabbing"
       {...attributes}
       {...listeners}
-      data-carry-type={carry.type}
-      data-carry-id={carry.id}
+      data-carry-type={carryType}
+      data-carry-id={carryId}
     >
       {gripDots}
     </button>
   );
-}
+});
 
 /**
  * What a card shows, apart from its drag wiring. Memoised on primitive props and the stop object
@@ -98,11 +104,12 @@ const StopGrip = memo(function StopGrip({ stop, disabled }: { stop: DocStop; dis
   useLayoutEffect(() => {
     node.current?.toggleAttribute("data-dragging", isDragging);
   }, [isDragging, node]);
-  return <DragHandle label={`Move ${stopTitle(stop)}`} carry={{ type: "stop", id: stop.id }} listeners={listeners} attributes={attributes} setRef={setRef} />;
+  return <DragHandle label={`Move ${stopTitle(stop)}`} carryType="stop" carryId={stop.id} listeners={listeners} attributes={attributes} setRef={setRef} />;
 });
 
 /**
- * A stop on the board. Only its grip is wired to the pointer (StopGrip); where it lands is worked
+ * A stop on the board. Cards out of sight are neither laid out nor painted (content-visibility), so
+ * a drop or a hover repaints what is on the screen, not 150 cards. Only its grip is wired to the pointer (StopGrip); where it lands is worked
  * out by the board from the pointer, so no card is measured or redrawn while the pointer moves. The
  * card being dragged is marked by its grip with an attribute (data-dragging), not by a redraw.
  */
@@ -123,7 +130,7 @@ export const StopCard = memo(function StopCard({
   const isCarried = carried?.type === "stop" && carried.id === stop.id;
   return (
     <li
-      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] data-[dragging]:border-dashed data-[dragging]:border-brass data-[dragging]:opacity-40 ${isCarried ? "border-brass ring-2 ring-brass/60" : "border-tin-rule"}`}
+      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] [contain-intrinsic-size:auto_3.25rem] [content-visibility:auto] data-[dragging]:border-dashed data-[dragging]:border-brass data-[dragging]:opacity-40 ${isCarried ? "border-brass ring-2 ring-brass/60" : "border-tin-rule"}`}
       data-carried={isCarried || undefined}
       data-testid={`stop-${stop.name}`}
       data-stop-id={stop.id}

@@ -5,10 +5,11 @@
  * latest document the figures shown are marked stale; the first ones arrive just after the page
  * has loaded, so neither the server nor hydration waits for an estimate.
  */
-import { useEffect, useRef, useState } from "react";
+import { useCallback, useEffect, useRef, useState } from "react";
 import type { Estimate, Rates } from "@/lib/estimate";
 import type { SchemeDocument, Tuning } from "@/lib/spec/document";
 import type { DrawingRules, EstimateWithoutMoney } from "@/lib/spec/estimate";
+import { patchOf } from "./doc-patch";
 import type { WorkerAnswer, WorkerRequest } from "./estimate-messages";
 
 /** Live figures carry the whole estimate; figures computed on the server for a reader without money:read carry it without money. */
@@ -54,20 +55,54 @@ function prime(job: Job, rates: Rates) {
   primed = p;
 }
 
-export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSource): FigureState {
+export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSource): FigureState & { ahead: (doc: SchemeDocument) => void } {
   const { pitchHz, temperatureC } = tuning;
-  const [live, setLive] = useState<{ figures: Figures | null; seq: number }>({ figures: null, seq: 0 });
-  const [wanted, setWanted] = useState(0);
+  // The figures shown and the document and tuning they were worked out for: they are stale while
+  // that is not the document shown.
+  const [live, setLive] = useState<{ figures: Figures | null; seq: number; job: Job | null }>({ figures: null, seq: 0, job: null });
   const worker = useRef<Worker | null>(null);
   const seq = useRef(0);
   // One job in the worker at a time; documents that arrive meanwhile keep only the latest.
   const busy = useRef(false);
   const next = useRef<{ seq: number; job: Job } | null>(null);
-  // The document the primed worker is already working on (its answer comes as sequence number 1).
-  const inFlight = useRef<Job | null>(null);
+  /** The jobs asked for by sequence number, until answered. */
+  const jobs = useRef(new Map<number, Job>());
+  /** The latest job asked for: the same document is not asked for twice. */
+  const asked = useRef<Job | null>(null);
+  /** The document the worker holds, which the next is sent as a patch on (doc-patch.ts). */
+  const held = useRef<SchemeDocument | null>(null);
+  const tuningRef = useRef<Tuning>({ pitchHz, temperatureC });
+  useEffect(() => {
+    tuningRef.current = { pitchHz, temperatureC };
+  }, [pitchHz, temperatureC]);
   const rates = source.kind === "live" ? source.rates : null;
   // In the first render in the browser, before the rest of the page hydrates (render-time, once).
   useState(() => (rates ? prime({ doc, tuning: { pitchHz, temperatureC } }, rates) : undefined));
+
+  const send = useCallback((w: Worker, s: number, job: Job) => {
+    busy.current = true;
+    const base = held.current;
+    held.current = job.doc;
+    w.postMessage(
+      (base ? { type: "estimate", seq: s, patch: patchOf(base, job.doc), tuning: job.tuning } : { type: "estimate", seq: s, doc: job.doc, tuning: job.tuning }) satisfies WorkerRequest,
+    );
+  }, []);
+
+  /** Asks the worker for the figures of `job` (once per document), now or after the job it is on. */
+  const request = useCallback(
+    (w: Worker, job: Job) => {
+      const last = asked.current;
+      if (last && last.doc === job.doc && last.tuning.pitchHz === job.tuning.pitchHz && last.tuning.temperatureC === job.tuning.temperatureC) return;
+      asked.current = job;
+      const s = ++seq.current;
+      jobs.current.set(s, job);
+      if (busy.current) {
+        if (next.current) jobs.current.delete(next.current.seq);
+        next.current = { seq: s, job };
+      } else send(w, s, job);
+    },
+    [send],
+  );
 
   useEffect(() => {
     if (!rates) return;
@@ -78,50 +113,70 @@ export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSo
     if (!adopted) w.postMessage({ type: "rates", rates } satisfies WorkerRequest);
     const onAnswer = ({ seq: s, result, ms }: WorkerAnswer) => {
       busy.current = false;
+      const job = jobs.current.get(s) ?? null;
+      for (const k of jobs.current.keys()) if (k <= s) jobs.current.delete(k);
       const queued = next.current;
       next.current = null;
       if (queued) send(w, queued.seq, queued.job);
-      setLive((prev) => (s < prev.seq ? prev : { seq: s, figures: result.ok ? { ok: true, estimate: result.estimate, ms } : result }));
+      setLive((prev) => (s < prev.seq ? prev : { seq: s, job, figures: result.ok ? { ok: true, estimate: result.estimate, ms } : result }));
     };
     w.onmessage = (e: MessageEvent<WorkerAnswer>) => onAnswer(e.data);
     worker.current = w;
-    busy.current = !!adopted;
-    inFlight.current = adopted?.job ?? null;
     next.current = null;
+    jobs.current.clear();
+    // The primed worker is on the first document already (sequence number 1) and holds it.
+    if (adopted) {
+      seq.current = Math.max(seq.current, 1);
+      jobs.current.set(1, adopted.job);
+      asked.current = adopted.job;
+      held.current = adopted.job.doc;
+      busy.current = true;
+    } else {
+      asked.current = null;
+      held.current = null;
+      busy.current = false;
+    }
     // An answer that came before this effect.
     for (const answer of adopted?.answers ?? []) onAnswer(answer);
     return () => {
       w.terminate();
       worker.current = null;
+      held.current = null;
+      asked.current = null;
+      busy.current = false;
     };
-  }, [rates]);
-
-  function send(w: Worker, s: number, job: Job) {
-    busy.current = true;
-    w.postMessage({ type: "estimate", seq: s, doc: job.doc, tuning: job.tuning } satisfies WorkerRequest);
-  }
+  }, [rates, send]);
 
   useEffect(() => {
     if (!rates) return;
-    const s = ++seq.current;
     const job = { doc, tuning: { pitchHz, temperatureC } };
-    setWanted(s);
     const w = worker.current;
-    const primedJob = inFlight.current;
-    inFlight.current = null;
-    // The primed worker is on this very document: its answer is this one's (both sequence number 1).
-    if (w && s === 1 && primedJob && primedJob.doc === doc && primedJob.tuning.pitchHz === pitchHz && primedJob.tuning.temperatureC === temperatureC) return;
     if (!w) {
       // No worker in this browser: the same estimator, here.
-      void estimateHere(job, rates).then((figures) => setLive((cur) => (s > cur.seq ? { seq: s, figures } : cur)));
+      const s = ++seq.current;
+      void estimateHere(job, rates).then((figures) => setLive((cur) => (s > cur.seq ? { seq: s, job, figures } : cur)));
       return;
     }
-    if (busy.current) next.current = { seq: s, job };
-    else send(w, s, job);
-  }, [doc, pitchHz, temperatureC, rates]);
+    request(w, job);
+  }, [doc, pitchHz, temperatureC, rates, request]);
 
-  if (source.kind === "fixed") return { figures: source.figures, stale: false };
-  return { figures: live.figures, stale: live.figures === null || live.seq < wanted };
+  /**
+   * Asks for the figures of a document about to be shown, before React draws it: the worker works
+   * while the page commits the edit, instead of after. The document's own render asks again, which
+   * then costs nothing.
+   */
+  const ahead = useCallback(
+    (upcoming: SchemeDocument) => {
+      const w = worker.current;
+      if (w) request(w, { doc: upcoming, tuning: tuningRef.current });
+    },
+    [request],
+  );
+
+  if (source.kind === "fixed") return { figures: source.figures, stale: false, ahead };
+  const shownFor = live.job;
+  const stale = live.figures === null || !shownFor || shownFor.doc !== doc || shownFor.tuning.pitchHz !== pitchHz || shownFor.tuning.temperatureC !== temperatureC;
+  return { figures: live.figures, stale, ahead };
 }
 
 export function drawingRulesOf(source: FigureSource): DrawingRules {
