@@ -111,6 +111,9 @@ function recordOf<K extends string>(keys: readonly K[], f: (k: K) => number): Re
   return o;
 }
 
+/** Whether each material (by index) is timber. */
+const WOOD_AT: readonly boolean[] = ALL_MATERIALS.map(isWood);
+
 const METALS = ["high-tin", "spotted", "common", "zinc", "copper"] as const;
 const WOODS = ["pine", "oak", "mahogany"] as const;
 
@@ -131,6 +134,10 @@ export function divisionWork(scheme: Scheme, plan: SchemePlan, agg: PipeAggregat
   }
   const duplexStops = new Float64Array(nDiv);
   for (const sp of plan.stops) if (sp.stop.duplex && (sp.kind === "own" || sp.kind === "prepared")) duplexStops[sp.divisionIndex]++;
+
+  // Per material index, once per estimate rather than per stop: lead in the alloy, timber density.
+  const leadAt = ALL_MATERIALS.map((m) => !isWood(m) && containsLead(rates.alloys[m]));
+  const woodKgPerM3 = ALL_MATERIALS.map((m) => (isWood(m) ? rates.woodDensityKgM3[m] : 0));
 
   const meanWindPerKey = (i: number) => {
     const sp = plan.stops[i];
@@ -185,18 +192,17 @@ export function divisionWork(scheme: Scheme, plan: SchemePlan, agg: PipeAggregat
       let kg = 0;
       let m3 = 0;
       for (let m = 0; m < MATERIAL_COUNT; m++) {
-        const v = agg.materials[si * MATERIAL_STRIDE + m] + agg.materials[si * MATERIAL_STRIDE + MATERIAL_COUNT + m];
+        const old = agg.materials[si * MATERIAL_STRIDE + MATERIAL_COUNT + m];
+        const v = agg.materials[si * MATERIAL_STRIDE + m] + old;
         if (v === 0) continue;
-        const material = ALL_MATERIALS[m];
         byMaterial[m] += v;
-        if (isWood(material)) m3 += v;
+        if (WOOD_AT[m]) m3 += v;
         else {
           kg += v;
-          if (containsLead(rates.alloys[material])) leadBearing = true;
+          if (leadAt[m]) leadBearing = true;
         }
         // Existing pipes go to the workshop and back: their weight is carried, their material not bought.
-        const old = agg.materials[si * MATERIAL_STRIDE + MATERIAL_COUNT + m];
-        if (old > 0) existingKg += isWood(material) ? old * rates.woodDensityKgM3[material] : old;
+        if (old > 0) existingKg += WOOD_AT[m] ? old * woodKgPerM3[m] : old;
       }
       if (sp.kind !== "removed") stopControls++;
       if (sp.kind === "own") {

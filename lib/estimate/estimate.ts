@@ -16,8 +16,8 @@ import { bookSiteTime, siteTimeOf, type SiteTime, type Transport, type Weights }
 import { bookManagement } from "./design";
 import { priceCentres, type Money } from "./money";
 import { centreHours, packageLabels, packages, type CostCentre, type PackageId } from "./cost-centres";
-import { DEPARTMENT_COUNT, departments, type Department } from "./departments";
-import { sumHours, totalHours } from "./labour";
+import { DEPARTMENT_COUNT, type Department } from "./departments";
+import { departmentRecord, sumHours, totalHours } from "./labour";
 import { metals, woods, type Metal, type Wood } from "./materials";
 import { cautionsFor, type Caution } from "./cautions";
 import type { WindNeed } from "./wind";
@@ -138,11 +138,10 @@ function recordOf<K extends string>(keys: readonly K[], f: (k: K) => number): Re
 
 /** Hours of some centres as shown: each centre's departments rounded to tenths, then summed exactly (in tenths). */
 function hoursOf(centres: readonly CostCentre[]): Record<Department, number> {
-  const tenths = new Array<number>(DEPARTMENT_COUNT).fill(0);
+  const tenths = new Float64Array(DEPARTMENT_COUNT);
   for (const c of centres) for (let d = 0; d < DEPARTMENT_COUNT; d++) tenths[d] += Math.round(c.hours[d] * 10);
-  const out = {} as Record<Department, number>;
-  for (let d = 0; d < DEPARTMENT_COUNT; d++) out[departments[d]] = tenths[d] / 10;
-  return out;
+  for (let d = 0; d < DEPARTMENT_COUNT; d++) tenths[d] /= 10;
+  return departmentRecord(tenths);
 }
 
 /**

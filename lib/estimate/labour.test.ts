@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { departments, type Department } from "./departments";
-import { dotBySize, hoursRecord, sumBySize, sumHours, totalHours } from "./labour";
+import { departmentRecord, dotBySize, hoursRecord, sumBySize, sumHours, totalHours } from "./labour";
 
 describe("hours as shown", () => {
   it("rounds each department to tenths and sums shown hours exactly", () => {
@@ -9,6 +9,12 @@ describe("hours as shown", () => {
     expect(s.metalPipes).toBe(0.3); // a float sum would give 0.30000000000000004
     expect(totalHours(s)).toBe(0.3 * departments.length);
     expect(hoursRecord(new Float64Array(departments.length).fill(1.26)).voicing).toBe(1.3);
+  });
+
+  it("writes a record with every department, in departments.ts order, each at its own position", () => {
+    const r = departmentRecord(departments.map((_, i) => i));
+    expect(Object.keys(r)).toEqual([...departments]);
+    departments.forEach((d, i) => expect(r[d]).toBe(i));
   });
 
   it("weights counts by a norm per size class", () => {

@@ -10,22 +10,35 @@ export function roundHours(h: number): number {
   return Math.round(h * 10) / 10;
 }
 
+/**
+ * A record by department of values in department order (departments.ts). Written as one literal, so
+ * every hours record an estimate builds has one shape instead of growing key by key; the test holds
+ * its keys equal to `departments`, in order.
+ */
+export function departmentRecord(v: ArrayLike<number>): Record<Department, number> {
+  return {
+    design: v[0], metalPipes: v[1], woodPipes: v[2], reeds: v[3], voicing: v[4], chestAction: v[5], casework: v[6], console: v[7],
+    electrics: v[8], dismantling: v[9], transport: v[10], erection: v[11], tonalFinishing: v[12], management: v[13],
+  };
+}
+
 /** Float64Array of department hours → record, rounded to tenths. */
 export function hoursRecord(a: ArrayLike<number>): Record<Department, number> {
-  const out = {} as Record<Department, number>;
-  for (let i = 0; i < DEPARTMENT_COUNT; i++) out[departments[i]] = roundHours(a[i]);
-  return out;
+  const rounded = new Float64Array(DEPARTMENT_COUNT);
+  for (let i = 0; i < DEPARTMENT_COUNT; i++) rounded[i] = roundHours(a[i]);
+  return departmentRecord(rounded);
 }
 
 /** Sum of hour records in tenths (exact), back in hours. */
 export function sumHours(records: readonly Readonly<Record<Department, number>>[]): Record<Department, number> {
-  const out = {} as Record<Department, number>;
-  for (const d of departments) {
+  const sums = new Float64Array(DEPARTMENT_COUNT);
+  for (let i = 0; i < DEPARTMENT_COUNT; i++) {
+    const d = departments[i];
     let tenths = 0;
     for (const r of records) tenths += Math.round(r[d] * 10);
-    out[d] = tenths / 10;
+    sums[i] = tenths / 10;
   }
-  return out;
+  return departmentRecord(sums);
 }
 
 export function totalHours(r: Readonly<Record<Department, number>>): number {

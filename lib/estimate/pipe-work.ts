@@ -43,13 +43,10 @@ export function bookPipeWork(
   rates: Rates, pipes: CostCentre, installation: CostCentre,
 ): PipeWorkBooked {
   const n = rates.norms;
+  // Called once per stop: no closures, and each kind of work looked up once.
+  const restored = s.work.includes("restored");
+  const rescaled = s.work.includes("rescaled");
   let booked = 0;
-  const add = (centre: CostCentre, dep: number, hours: number) => {
-    if (hours === 0) return;
-    centre.hours[dep] += hours;
-    booked += hours;
-  };
-  const shopOf = (kind: number) => (kind === WOOD_FLUE || kind === WOOD_REED ? D.woodPipes : D.metalPipes);
 
   // New pipes: the body or resonator by its size, reed parts and voicing by pitch.
   const newBody = s.stop * BODY_STRIDE;
@@ -57,12 +54,12 @@ export function bookPipeWork(
     const at = newBody + kind * 5;
     if (sumBySize(bodyCounts, at) === 0) continue;
     const norm = kind === METAL_FLUE ? n.newMetalPipe : kind === METAL_REED ? n.reedResonator : n.newWoodPipe;
-    add(pipes, shopOf(kind), dotBySize(bodyCounts, at, norm));
+    booked += book(pipes, shopOf(kind), dotBySize(bodyCounts, at, norm));
   }
   const newPitch = s.stop * PITCH_STRIDE;
-  add(pipes, D.voicing, dotBySize(pitchCounts, newPitch, n.voiceNewFluePipe));
-  add(pipes, D.reeds, dotBySize(pitchCounts, newPitch + 5, n.reedParts));
-  add(pipes, D.voicing, dotBySize(pitchCounts, newPitch + 5, n.voiceNewReedPipe));
+  booked += book(pipes, D.voicing, dotBySize(pitchCounts, newPitch, n.voiceNewFluePipe));
+  booked += book(pipes, D.reeds, dotBySize(pitchCounts, newPitch + 5, n.reedParts));
+  booked += book(pipes, D.voicing, dotBySize(pitchCounts, newPitch + 5, n.voiceNewReedPipe));
 
   // Existing pipes: the work on them.
   const oldBody = s.stop * BODY_STRIDE + KINDS * 5;
@@ -70,46 +67,59 @@ export function bookPipeWork(
   const flues = sumBySize(pitchCounts, oldPitch);
   const reeds = sumBySize(pitchCounts, oldPitch + 5);
   if (flues + reeds > 0) {
-    const restored = s.work.includes("restored");
     for (let kind = 0; kind < KINDS; kind++) {
       const at = oldBody + kind * 5;
       if (sumBySize(bodyCounts, at) === 0) continue;
       const wood = kind === WOOD_FLUE || kind === WOOD_REED;
+      const shop = shopOf(kind);
       if (restored) {
-        add(pipes, shopOf(kind), dotBySize(bodyCounts, at, wood ? n.restoreWoodPipe : n.restoreMetalPipe));
-        for (const f of s.condition) if (FINDINGS_BY_KIND[kind].includes(f)) add(pipes, shopOf(kind), dotBySize(bodyCounts, at, n.finding[f]));
+        booked += book(pipes, shop, dotBySize(bodyCounts, at, wood ? n.restoreWoodPipe : n.restoreMetalPipe));
+        for (const f of s.condition) if (FINDINGS_BY_KIND[kind].includes(f)) booked += book(pipes, shop, dotBySize(bodyCounts, at, n.finding[f]));
       } else {
-        add(pipes, shopOf(kind), dotBySize(bodyCounts, at, n.cleanPipe));
+        booked += book(pipes, shop, dotBySize(bodyCounts, at, n.cleanPipe));
       }
-      if (s.work.includes("rescaled")) add(pipes, shopOf(kind), dotBySize(bodyCounts, at, n.rescalePipe));
+      if (rescaled) booked += book(pipes, shop, dotBySize(bodyCounts, at, n.rescalePipe));
     }
     if (restored) {
-      add(pipes, D.reeds, dotBySize(pitchCounts, oldPitch + 5, n.restoreReedParts));
-      for (const f of s.condition) if (REED_PART_FINDINGS.includes(f)) add(pipes, D.reeds, dotBySize(pitchCounts, oldPitch + 5, n.finding[f]));
-      add(pipes, D.voicing, (flues + reeds) * n.regulateRestoredPipe);
+      booked += book(pipes, D.reeds, dotBySize(pitchCounts, oldPitch + 5, n.restoreReedParts));
+      for (const f of s.condition) if (REED_PART_FINDINGS.includes(f)) booked += book(pipes, D.reeds, dotBySize(pitchCounts, oldPitch + 5, n.finding[f]));
+      booked += book(pipes, D.voicing, (flues + reeds) * n.regulateRestoredPipe);
     }
-    if (s.work.includes("revoiced")) add(pipes, D.voicing, flues * n.revoiceFluePipe + reeds * n.revoiceReedPipe);
-    if (s.work.includes("relocated")) add(installation, D.erection, (flues + reeds) * n.relocatePipe);
+    if (s.work.includes("revoiced")) booked += book(pipes, D.voicing, flues * n.revoiceFluePipe + reeds * n.revoiceReedPipe);
+    if (s.work.includes("relocated")) booked += book(installation, D.erection, (flues + reeds) * n.relocatePipe);
   }
 
   // Material bought: new metal and timber with their allowances; a share of restored pipes' metal for repairs.
-  const restoredShare = s.work.includes("restored") ? rates.pipeMetal.repairPercent / 100 : 0;
+  const restoredShare = restored ? rates.pipeMetal.repairPercent / 100 : 0;
   let metalBoughtKg = 0;
   let woodBoughtM3 = 0;
   for (let m = 0; m < MATERIAL_COUNT; m++) {
-    const material = ALL_MATERIALS[m];
     const fresh = finished[s.stop * MATERIAL_STRIDE + m];
     const old = finished[s.stop * MATERIAL_STRIDE + MATERIAL_COUNT + m];
     if (fresh === 0 && old === 0) continue;
+    const material = ALL_MATERIALS[m];
     const wood = m >= 5;
     const allowance = wood ? rates.woodPipes.allowancePercent : rates.pipeMetal.allowancePercent[material as "spotted"];
     const bought = fresh * (1 + allowance / 100) + (wood ? 0 : old * restoredShare);
-    pipes.materials[MATERIAL_LINE[material]] += bought;
+    pipes.materials[LINE_OF_MATERIAL[m]] += bought;
     if (wood) woodBoughtM3 += bought;
     else metalBoughtKg += bought;
   }
   return { hours: booked, metalBoughtKg, woodBoughtM3 };
 }
+
+/** Books hours into a centre's department; returns them, for the stop's own total. */
+function book(centre: CostCentre, dep: number, hours: number): number {
+  if (hours !== 0) centre.hours[dep] += hours;
+  return hours;
+}
+
+function shopOf(kind: number): number {
+  return kind === WOOD_FLUE || kind === WOOD_REED ? D.woodPipes : D.metalPipes;
+}
+
+/** Each material's line in a centre (cost-centres.ts), by material index. */
+const LINE_OF_MATERIAL: readonly number[] = ALL_MATERIALS.map((m) => MATERIAL_LINE[m]);
 
 /** Tonal finishing on site, per stop and per pipe. */
 export function finishingHours(w: { readonly fullStops: number; readonly existingStops: number; readonly derivedStops: number; readonly pipes: number }, n: Norms): number {

@@ -462,19 +462,22 @@ export function planScheme(scheme: Scheme): SchemePlan {
 function formsOf(d: Draft, forms: PipeForm[]): number[] {
   const s = d.stop;
   const reed = s.construction === "reed";
-  const main: PipeForm = {
-    stop: d.index, construction: s.construction, material: s.material, reed, wood: isWood(s.material),
-    resonatorFraction: reed ? RESONATOR[s.resonator?.length ?? "full"] : 1, conicalResonator: reed && (s.resonator?.shape ?? "conical") === "conical",
-  };
-  const out = [forms.push(main) - 1];
+  const resonatorFraction = reed ? RESONATOR[s.resonator?.length ?? "full"] : 1;
+  const conical = reed && (s.resonator?.shape ?? "conical") === "conical";
+  const out = [forms.push(pipeForm(d.index, s.construction, s.material, reed, resonatorFraction, conical)) - 1];
   if (s.bass) {
     const construction = reed ? "reed" : s.bass.construction ?? s.construction;
-    out.push(forms.push({ ...main, construction, material: s.bass.material, wood: isWood(s.bass.material) }) - 1);
+    out.push(forms.push(pipeForm(d.index, construction, s.bass.material, reed, resonatorFraction, conical)) - 1);
   }
-  if (reed && s.fluesFrom) {
-    out.push(forms.push({ ...main, construction: "open", reed: false, resonatorFraction: 1, conicalResonator: false }) - 1);
-  }
+  if (reed && s.fluesFrom) out.push(forms.push(pipeForm(d.index, "open", s.material, false, 1, false)) - 1);
   return out;
+}
+
+/** One form, built field by field (a spread of another form costs several times as much, per rank). */
+function pipeForm(
+  stop: number, construction: Stop["construction"], material: Material, reed: boolean, resonatorFraction: number, conicalResonator: boolean,
+): PipeForm {
+  return { stop, construction, material, reed, wood: isWood(material), resonatorFraction, conicalResonator };
 }
 
 const RESONATOR = { full: 1, half: 1 / 2, quarter: 1 / 4, eighth: 1 / 8, sixteenth: 1 / 16 } as const;
