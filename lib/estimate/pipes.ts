@@ -148,11 +148,16 @@ export interface PlanIssue {
   readonly message: string;
 }
 type Say = (path: readonly (string | number)[], message: string) => void;
+/** A message about one field of a stop, worded with the division and stop names. */
+type SayOfStop = (d: Draft, field: string, message: string) => void;
 
 /** Message prefixes name the division and stop by their names, as the user wrote them. */
 export function where(d: { readonly name: string }, s?: { readonly name: string }): string {
   return s ? `Division "${d.name}", stop "${s.name}"` : `Division "${d.name}"`;
 }
+
+/** The path of a stop's field, for messages shown in place. */
+const stopField = (di: number, si: number, field: string) => ["divisions", di, "stops", si, field];
 
 const footageText = (f: string | number) => (typeof f === "number" ? String(f) : f);
 const range = (lo: number, hi: number) => (lo === hi ? midiToNote(lo) : `${midiToNote(lo)}–${midiToNote(hi)}`);
@@ -190,6 +195,7 @@ export function planScheme(scheme: Scheme): SchemePlan {
   const drafts: Draft[] = [];
   const stopPath = (d: Draft, field: string) => ["divisions", d.divisionIndex, "stops", scheme.divisions[d.divisionIndex].stops.indexOf(d.stop), field];
   const atOf = (d: Draft) => where(scheme.divisions[d.divisionIndex], d.stop);
+  const sayOfStop: SayOfStop = (d, field, message) => say(stopPath(d, field), `${atOf(d)}: ${message}`);
 
   scheme.divisions.forEach((division, di) => {
     if (divisionIds.has(division.id)) say(["divisions", di, "id"], `${where(division)}: the id "${division.id}" is used by another division`);
@@ -202,29 +208,28 @@ export function planScheme(scheme: Scheme): SchemePlan {
       say(["divisions", di, "compass"], `${where(division)}: compass runs downward (${division.compass.low} to ${division.compass.high}); give the lowest note first`);
     }
     const stopIndexes: number[] = [];
-    division.stops.forEach((stop, si) => {
+    // A plain loop with no closures per stop: messages are worded, and their paths built, only when needed.
+    for (let si = 0; si < division.stops.length; si++) {
+      const stop = division.stops[si];
       const index = drafts.length;
-      // Worded only when a message needs it: most stops are sound.
-      const at = () => where(division, stop);
-      const sp = (field: string) => ["divisions", di, "stops", si, field];
-      if (stopById.has(stop.id)) say(sp("id"), `${at()}: the id "${stop.id}" is used by another stop`);
+      if (stopById.has(stop.id)) say(stopField(di, si, "id"), `${where(division, stop)}: the id "${stop.id}" is used by another stop`);
       else stopById.set(stop.id, index);
       let lowKey = c.lowMidi;
       let highKey = c.highMidi;
       if (stop.compass) {
         const sc = compassOf(stop.compass);
-        if (!sc) say(sp("compass"), `${at()}: compass ${stop.compass.low}–${stop.compass.high} is not in note names`);
-        else if (sc.lowMidi > sc.highMidi) say(sp("compass"), `${at()}: compass runs downward (${stop.compass.low} to ${stop.compass.high}); give the lowest note first`);
+        if (!sc) say(stopField(di, si, "compass"), `${where(division, stop)}: compass ${stop.compass.low}–${stop.compass.high} is not in note names`);
+        else if (sc.lowMidi > sc.highMidi) say(stopField(di, si, "compass"), `${where(division, stop)}: compass runs downward (${stop.compass.low} to ${stop.compass.high}); give the lowest note first`);
         else if (sc.lowMidi < c.lowMidi || sc.highMidi > c.highMidi)
-          say(sp("compass"), `${at()}: compass ${stop.compass.low}–${stop.compass.high} goes beyond the division's ${division.compass.low}–${division.compass.high}`);
+          say(stopField(di, si, "compass"), `${where(division, stop)}: compass ${stop.compass.low}–${stop.compass.high} goes beyond the division's ${division.compass.low}–${division.compass.high}`);
         else [lowKey, highKey] = [sc.lowMidi, sc.highMidi];
       }
       const footage = footageOf(stop.footage);
-      if (!footage) say(sp("footage"), `${at()}: footage "${footageText(stop.footage)}" ${MSG_NOT_FOOTAGE}`);
+      if (!footage) say(stopField(di, si, "footage"), `${where(division, stop)}: footage "${footageText(stop.footage)}" ${MSG_NOT_FOOTAGE}`);
       const f = footage ?? { num: 8, den: 1 };
       const notes = compassNoteCount(lowKey, highKey);
       const kind = kindOf(stop.origin);
-      checkStopFields(stop, kind, notes, lowKey, highKey, at, sp, say);
+      checkStopFields(stop, kind, notes, lowKey, highKey, division, di, si, say);
       drafts.push({
         index, divisionIndex: di, stop, kind, work: stop.work.length > 1 ? [...new Set(stop.work)] : stop.work,
         lowKey, highKey, notes, ranks: stop.ranks, ranksFrom: stop.ranks, ranksTo: stop.ranks,
@@ -233,7 +238,7 @@ export function planScheme(scheme: Scheme): SchemePlan {
         sourceDivisionIndex: di, forms: [], pipes: NO_PIPES,
       });
       stopIndexes.push(index);
-    });
+    }
     divisions.push({
       index: di, division, lowKey: c.lowMidi, highKey: c.highMidi, notes: compassNoteCount(c.lowMidi, c.highMidi), stops: stopIndexes,
       unitChest: UNIT_CHESTS.includes(division.chest),
@@ -314,7 +319,7 @@ export function planScheme(scheme: Scheme): SchemePlan {
     }
     if (d.kind !== "own" && d.kind !== "prepared") continue;
     d.forms = formsOf(d, forms);
-    const rankRuns = breakPlan(d, tuning, (field, message) => say(stopPath(d, field), `${atOf(d)}: ${message}`));
+    const rankRuns = breakPlan(d, tuning, sayOfStop);
     const status: PipeStatus = d.kind === "prepared" ? PREPARED : d.stop.origin === "existing" ? EXISTING : NEW;
     // Re-scaled ranks: the pipes move by rescaleHt keys; the keys they leave empty get new pipes.
     const shiftBy = status === EXISTING && d.work.includes("rescaled") ? d.stop.rescaleHt : 0;
@@ -484,12 +489,12 @@ const RESONATOR = { full: 1, half: 1 / 2, quarter: 1 / 4, eighth: 1 / 8, sixteen
 
 /** Field rules a single stop can break on its own. */
 function checkStopFields(
-  stop: Stop, kind: StopKind, notes: number, lowKey: number, highKey: number, where: () => string,
-  sp: (field: string) => (string | number)[], say: Say,
+  stop: Stop, kind: StopKind, notes: number, lowKey: number, highKey: number, division: Division, di: number, si: number, say: Say,
 ): void {
   // Most stops pass every rule; the common case costs no string.
   if (!stop.offsetBassPipes && !stop.work.length && !stop.rescaleHt && !stop.fluesFrom && !stop.resonator && !stop.bass && !stop.duplex) return;
-  const at = where();
+  const at = where(division, stop);
+  const sp = (field: string) => stopField(di, si, field);
   if (stop.offsetBassPipes > notes) say(sp("offsetBassPipes"), `${at}: ${stop.offsetBassPipes} offset bass pipes, but the stop has only ${notes} notes`);
   const existingPipes = stop.origin === "existing" || (stop.origin === "extension" && stop.addedPipes === "existing");
   if (stop.work.length && !existingPipes)
@@ -518,17 +523,12 @@ function checkStopFields(
  * Per rank, the runs of keys with one footage: from the breaks for mixtures, else the stop's
  * footage. A run is null where a progressive mixture's rank is silent.
  */
-function breakPlan(d: Draft, tuning: Scheme["tuning"]["mutations"], say: (field: string, message: string) => void): Run[][] {
-  const plain = () => {
-    const out: Run[][] = [];
-    for (let r = 0; r < d.ranks; r++) out.push([{ fromKey: d.lowKey, shift: d.shift, footage: d.footage }]);
-    return out;
-  };
+function breakPlan(d: Draft, tuning: Scheme["tuning"]["mutations"], sayOfStop: SayOfStop): Run[][] {
   const breaks = d.stop.breaks;
   if (!breaks || breaks.length === 0) {
     if (d.ranks > 1 && (d.stop.family === "mixture" || d.stop.family === "mutation"))
-      say("breaks", `a ${d.stop.family} of ${d.ranks} ranks needs breaks giving each rank's footage`);
-    return plain();
+      sayOfStop(d, "breaks", `a ${d.stop.family} of ${d.ranks} ranks needs breaks giving each rank's footage`);
+    return plainRuns(d);
   }
   const out: Run[][] = Array.from({ length: d.ranks }, () => []);
   let prevKey = -Infinity;
@@ -536,24 +536,24 @@ function breakPlan(d: Draft, tuning: Scheme["tuning"]["mutations"], say: (field:
   breaks.forEach((b, bi) => {
     const key = keyOf(b.from);
     if (key === null) {
-      say("breaks", `break "${b.from}" is not a note name`);
+      sayOfStop(d, "breaks", `break "${b.from}" is not a note name`);
       ok = false;
       return;
     }
     if (b.footages.length !== d.ranks) {
-      say("breaks", `the break at ${b.from} gives ${b.footages.length} footages for ${d.ranks} ranks`);
+      sayOfStop(d, "breaks", `the break at ${b.from} gives ${b.footages.length} footages for ${d.ranks} ranks`);
       ok = false;
     }
     if (key <= prevKey) {
-      say("breaks", `breaks must go upward; ${b.from} comes after a higher or equal note`);
+      sayOfStop(d, "breaks", `breaks must go upward; ${b.from} comes after a higher or equal note`);
       ok = false;
     }
     if (bi > 0 && (key < d.lowKey || key > d.highKey)) {
-      say("breaks", `break at ${b.from} lies outside the stop's compass`);
+      sayOfStop(d, "breaks", `break at ${b.from} lies outside the stop's compass`);
       ok = false;
     }
     if (b.footages.every((f) => f === null)) {
-      say("breaks", `the break at ${b.from} leaves every rank silent`);
+      sayOfStop(d, "breaks", `the break at ${b.from} leaves every rank silent`);
       ok = false;
     }
     prevKey = key;
@@ -566,14 +566,21 @@ function breakPlan(d: Draft, tuning: Scheme["tuning"]["mutations"], say: (field:
       }
       const f = footageOf(text);
       if (!f) {
-        say("breaks", `break at ${b.from}, rank ${r + 1}: footage "${footageText(text)}" ${MSG_NOT_FOOTAGE}`);
+        sayOfStop(d, "breaks", `break at ${b.from}, rank ${r + 1}: footage "${footageText(text)}" ${MSG_NOT_FOOTAGE}`);
         ok = false;
         continue;
       }
       out[r].push({ fromKey, shift: semitonesAbove8ft(f, tuning), footage: f });
     }
   });
-  return ok ? out : plain();
+  return ok ? out : plainRuns(d);
+}
+
+/** Every rank of the stop at its own footage, over its whole compass. */
+function plainRuns(d: Draft): Run[][] {
+  const out: Run[][] = [];
+  for (let r = 0; r < d.ranks; r++) out.push([{ fromKey: d.lowKey, shift: d.shift, footage: d.footage }]);
+  return out;
 }
 
 function checkAccessories(scheme: Scheme, divisionIds: ReadonlySet<string>, say: Say): void {
