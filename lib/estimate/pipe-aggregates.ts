@@ -69,6 +69,15 @@ function exp2Semitones(k: number): number {
   return Number.isInteger(k) && k >= -120 && k <= 120 ? EXP2_TABLE[k + 120] : Math.pow(2, k / 12);
 }
 const EXP2_33 = Math.pow(2, 33 / 12);
+/**
+ * 2^(−k/16) for whole k in −256 … 256 by table, by pow otherwise: a scale's reference diameter halves
+ * every 16 semitones of deviation. Filled by the same pow, so equal to the last bit; a pow per form
+ * cost about 2 % of an estimate.
+ */
+const EXP2_NEG_SIXTEENTHS = Float64Array.from({ length: 513 }, (_, i) => Math.pow(2, -(i - 256) / 16));
+function exp2NegSixteenths(k: number): number {
+  return Number.isInteger(k) && k >= -256 && k <= 256 ? EXP2_NEG_SIXTEENTHS[k + 256] : Math.pow(2, -k / 16);
+}
 const MIN_LF = MIN_LENGTH_FRACTION;
 const SQ_SIDE = SQUARE_SIDE_PER_DIAMETER;
 const PI = Math.PI;
@@ -141,8 +150,8 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
   // exponentials of logarithms (Math.pow costs several times Math.exp), from ln D at the reference.
   const runs = plan.forms.map((form, i) => {
     const g = forms[i];
-    // By pow, so a whole number of halvings gives the exact diameter (77.75 mm is half of 155.5 mm, and rounds up).
-    const dRef = D_8FT_C * Math.pow(2, -(g.referenceSemitones - g.deviationHt) / 16);
+    // By pow (or its table), so a whole number of halvings gives the exact diameter (77.75 mm is half of 155.5 mm, and rounds up).
+    const dRef = D_8FT_C * exp2NegSixteenths(g.referenceSemitones - g.deviationHt);
     const lnDRef = Math.log(dRef);
     const lnRatio = -Math.LN2 / (g.halvingOn - 1); // ln of diameterRatioPerSemitone
     const tExp = g.wood ? wp.boardExponent : pm.thicknessExponent;
