@@ -222,11 +222,14 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
     let diaAtMain = 0;
     // Size classes change at most four times along a run: the pipes go in pieces of one class
     // (one foot length), counted by logarithms as splitBySizeClass does, not pipe by pipe.
+    // An open flue's body is as long as its pitch: its pipes by pitch are the same pieces, not split again.
+    const pitchAsBody = made && run.lengthSemitones === 0;
     let i = 0;
     for (let cls = 0; cls <= 4; cls++) {
       const end = cls < 4 ? pipesLongerThanBound(bodyTop, cls, n) : n;
       if (end <= i) continue;
       if (made) bodyCounts[bodyBase + cls] += end - i;
+      if (pitchAsBody) pitchCounts[pitchBase + cls] += end - i;
       const halfFoot = 0.5 * foot[cls];
       // Stretches on the offset chest and on the main chest, so no pipe asks which chest it stands on.
       while (i < end) {
@@ -263,7 +266,7 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
         }
       }
     }
-    if (made) splitBySizeClassFrom(pitchTop, n, pitchCounts, pitchBase);
+    if (made && !pitchAsBody) splitBySizeClassFrom(pitchTop, n, pitchCounts, pitchBase);
     // Pipes get smaller up a run, so its first pipe (on each chest) is its largest and longest.
     rowC[row] += cSide;
     rowCs[row] += csSide;
