@@ -229,7 +229,7 @@ export function planScheme(scheme: Scheme): SchemePlan {
       const f = footage ?? { num: 8, den: 1 };
       const notes = compassNoteCount(lowKey, highKey);
       const kind = kindOf(stop.origin);
-      checkStopFields(stop, kind, notes, lowKey, highKey, division, di, si, say);
+      if (hasFieldsToCheck(stop)) checkStopFields(stop, kind, notes, lowKey, highKey, division, di, si, say);
       drafts.push({
         index, divisionIndex: di, stop, kind, work: stop.work.length > 1 ? [...new Set(stop.work)] : stop.work,
         lowKey, highKey, notes, ranks: stop.ranks, ranksFrom: stop.ranks, ranksTo: stop.ranks,
@@ -487,12 +487,15 @@ function pipeForm(
 
 const RESONATOR = { full: 1, half: 1 / 2, quarter: 1 / 4, eighth: 1 / 8, sixteenth: 1 / 16 } as const;
 
-/** Field rules a single stop can break on its own. */
+/** Whether a stop sets any field that checkStopFields has a rule for: most stops set none, and skip the call. */
+function hasFieldsToCheck(stop: Stop): boolean {
+  return !!(stop.offsetBassPipes || stop.work.length || stop.rescaleHt || stop.fluesFrom || stop.resonator || stop.bass || stop.duplex);
+}
+
+/** Field rules a single stop can break on its own (only stops with hasFieldsToCheck can break one). */
 function checkStopFields(
   stop: Stop, kind: StopKind, notes: number, lowKey: number, highKey: number, division: Division, di: number, si: number, say: Say,
 ): void {
-  // Most stops pass every rule; the common case costs no string.
-  if (!stop.offsetBassPipes && !stop.work.length && !stop.rescaleHt && !stop.fluesFrom && !stop.resonator && !stop.bass && !stop.duplex) return;
   const at = where(division, stop);
   const sp = (field: string) => stopField(di, si, field);
   if (stop.offsetBassPipes > notes) say(sp("offsetBassPipes"), `${at}: ${stop.offsetBassPipes} offset bass pipes, but the stop has only ${notes} notes`);
