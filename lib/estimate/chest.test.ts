@@ -1,6 +1,6 @@
 import { DEFAULT_RATES } from "./demo-rates";
 import { describe, expect, it } from "vitest";
-import { chestFit, chestSideOf, chestSize, clearanceMm, pipeRowWidthMm, placeRow, rowOf, type ChestRow } from "./chest";
+import { chestFit, chestSideOf, chestSize, clearanceMm, pipeRowWidthMm, placeRow, rowOf, rowWidthMm, type ChestRow } from "./chest";
 import { estimateScheme } from "./estimate";
 import { manual, scheme, stop } from "./test-support/schemes";
 
@@ -11,6 +11,7 @@ describe("chest space", () => {
   it("gives each pipe its diameter plus a clearance that grows with the pipe", () => {
     expect(clearanceMm(100, N)).toBe(30);
     expect(pipeRowWidthMm(100, 100, N)).toBe(130);
+    expect(rowWidthMm(100, 100, N.clearanceMinMm, N.clearanceFractionOfDiameter)).toBe(130);
     expect(clearanceMm(200, N)).toBeGreaterThan(clearanceMm(100, N));
   });
 

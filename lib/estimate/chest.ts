@@ -20,7 +20,12 @@ export function clearanceMm(diameterMm: number, n: ChestNorms): number {
 
 /** Row length in mm one pipe takes: its footprint plus clearance. */
 export function pipeRowWidthMm(footprintMm: number, diameterMm: number, n: ChestNorms): number {
-  return footprintMm + n.clearanceMinMm + n.clearanceFractionOfDiameter * diameterMm;
+  return rowWidthMm(footprintMm, diameterMm, n.clearanceMinMm, n.clearanceFractionOfDiameter);
+}
+
+/** pipeRowWidthMm with the norms' two clearances as numbers: the per-pipe stage reads them once per estimate, not per pipe. */
+export function rowWidthMm(footprintMm: number, diameterMm: number, clearanceMinMm: number, clearanceFractionOfDiameter: number): number {
+  return footprintMm + clearanceMinMm + clearanceFractionOfDiameter * diameterMm;
 }
 
 /** Depth in mm of a row: its largest pipe plus that pipe's clearance. */

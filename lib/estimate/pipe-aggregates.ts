@@ -16,7 +16,7 @@ import { FT8_MM, pipesLongerThanBound, sizeClassIndex, sizeClasses, splitBySizeC
 import { formGeometry, jetSpeedMPerS, REFERENCE_MOUTH_MM, type FormGeometry } from "./geometry";
 import { EXISTING, PREPARED, type SchemePlan } from "./pipes";
 import { windPressureMm } from "./units";
-import { pipeRowWidthMm } from "./chest";
+import { rowWidthMm } from "./chest";
 
 /** Kinds of pipe for the norms: metal flue, wooden flue, reed with a metal resonator, reed with a wooden one. */
 export const METAL_FLUE = 0;
@@ -91,8 +91,8 @@ const MATERIAL_INDEX_ = MATERIAL_INDEX;
 const EXISTING_ = EXISTING;
 const PREPARED_ = PREPARED;
 const jetSpeed = jetSpeedMPerS;
-/** The chest rule's width of one pipe along its row (chest.ts), the same function the drawing uses. */
-const rowWidth = pipeRowWidthMm;
+/** The chest rule's width of one pipe along its row (chest.ts, pipeRowWidthMm: the rule the drawing uses). */
+const rowWidth = rowWidthMm;
 
 export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): PipeAggregates {
   const nStops = plan.stops.length;
@@ -174,6 +174,9 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
   const sqSide = SQ_SIDE;
   const pi = PI;
   const invSemitone = INV_SEMITONE;
+  // The chest rule's clearances, read once rather than from the norms object per pipe.
+  const clearMin = chestNorms.clearanceMinMm;
+  const clearFrac = chestNorms.clearanceFractionOfDiameter;
   for (let sIndex = 0; sIndex < segments.length; sIndex++) {
     const seg = segments[sIndex];
     const run = runs[seg.form];
@@ -253,7 +256,7 @@ export function aggregatePipes(scheme: Scheme, plan: SchemePlan, rates: Rates): 
             footprint = d;
             vol += (pi * d * (len * areaF + halfFoot) + top * d * d) * th;
           }
-          const wdt = rowWidth(footprint, d, chestNorms);
+          const wdt = rowWidth(footprint, d, clearMin, clearFrac);
           if (onOffset) offSide += wdt;
           else if (odd === 0) cSide += wdt;
           else csSide += wdt;
