@@ -123,8 +123,12 @@ export function divisionWork(scheme: Scheme, plan: SchemePlan, agg: PipeAggregat
   const combination = scheme.accessories.combination.generalPistons + scheme.accessories.combination.divisionalPistons + scheme.accessories.combination.memoryLevels > 0;
 
   // Chest rows per division, and the stops with a row (sliders).
-  const mainRows: ChestRow[][] = Array.from({ length: nDiv }, () => []);
-  const offRows: ChestRow[][] = Array.from({ length: nDiv }, () => []);
+  const mainRows: ChestRow[][] = [];
+  const offRows: ChestRow[][] = [];
+  for (let i = 0; i < nDiv; i++) {
+    mainRows.push([]);
+    offRows.push([]);
+  }
   const chestStops = new Float64Array(nDiv);
   for (let r = 0; r < plan.rows.length; r++) {
     const dv = plan.rows[r].division;

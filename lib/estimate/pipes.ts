@@ -197,7 +197,8 @@ export function planScheme(scheme: Scheme): SchemePlan {
   const atOf = (d: Draft) => where(scheme.divisions[d.divisionIndex], d.stop);
   const sayOfStop: SayOfStop = (d, field, message) => say(stopPath(d, field), `${atOf(d)}: ${message}`);
 
-  scheme.divisions.forEach((division, di) => {
+  for (let di = 0; di < scheme.divisions.length; di++) {
+    const division = scheme.divisions[di];
     if (divisionIds.has(division.id)) say(["divisions", di, "id"], `${where(division)}: the id "${division.id}" is used by another division`);
     divisionIds.add(division.id);
     let c = compassOf(division.compass);
@@ -243,7 +244,7 @@ export function planScheme(scheme: Scheme): SchemePlan {
       index: di, division, lowKey: c.lowMidi, highKey: c.highMidi, notes: compassNoteCount(c.lowMidi, c.highMidi), stops: stopIndexes,
       unitChest: UNIT_CHESTS.includes(division.chest),
     });
-  });
+  }
 
   // Sources of extensions and borrowings, followed to the stop that owns the rank.
   for (const d of drafts) {
@@ -533,15 +534,18 @@ function breakPlan(d: Draft, tuning: Scheme["tuning"]["mutations"], sayOfStop: S
       sayOfStop(d, "breaks", `a ${d.stop.family} of ${d.ranks} ranks needs breaks giving each rank's footage`);
     return plainRuns(d);
   }
-  const out: Run[][] = Array.from({ length: d.ranks }, () => []);
+  // A loop, not Array.from({ length }): that takes the generic iterable path, slow enough to show per stop.
+  const out: Run[][] = [];
+  for (let r = 0; r < d.ranks; r++) out.push([]);
   let prevKey = -Infinity;
   let ok = true;
-  breaks.forEach((b, bi) => {
+  for (let bi = 0; bi < breaks.length; bi++) {
+    const b = breaks[bi];
     const key = keyOf(b.from);
     if (key === null) {
       sayOfStop(d, "breaks", `break "${b.from}" is not a note name`);
       ok = false;
-      return;
+      continue;
     }
     if (b.footages.length !== d.ranks) {
       sayOfStop(d, "breaks", `the break at ${b.from} gives ${b.footages.length} footages for ${d.ranks} ranks`);
@@ -575,7 +579,7 @@ function breakPlan(d: Draft, tuning: Scheme["tuning"]["mutations"], sayOfStop: S
       }
       out[r].push({ fromKey, shift: semitonesAbove8ft(f, tuning), footage: f });
     }
-  });
+  }
   return ok ? out : plainRuns(d);
 }
 
