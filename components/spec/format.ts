@@ -1,11 +1,9 @@
 /** How the trade writes pitches, compasses and what happens to each stop: shared by the editor, the stop list and the drawings. */
-// Types only from the scheme model and the pitch module alone: the editor's first scripts use this
+// The scheme's words, its types and the pitch module alone: the editor's first scripts use this
 // module, and the scheme model or the estimator's barrel would bring zod and the whole estimator with it
-// (they run in the figures worker). `format.test.ts` holds the orders below equal to the model's.
-import type {
-  actions, chestTypes, families, constructions, materials, resonatorLengths,
-  Finding, Origin, PipeWork,
-} from "@/lib/estimate/scheme";
+// (they run in the figures worker).
+import type { Finding, Origin, PipeWork } from "@/lib/estimate/scheme";
+import { findings, origins, pipeWorks, type actions, type chestTypes, type constructions, type families, type materials, type resonatorLengths } from "@/lib/estimate/scheme-terms";
 import { formatFootage, parseFootage } from "@/lib/estimate/pitch";
 import { formatAmount } from "@/lib/quote/amount-text";
 import { currencySymbol } from "@/lib/quote/currency";
@@ -260,10 +258,9 @@ export function formatTimeOfDay(iso: string): string {
   return d.toDateString() === new Date().toDateString() ? time : `${d.toLocaleDateString("en-GB", { day: "numeric", month: "short" })}, ${time}`;
 }
 
-/** The scheme model's orders (`origins`, `findings`, `pipeWorks`), as the labels list them. */
-export const originOrder = Object.keys(originLabels) as Origin[];
-export const findingOrder = Object.keys(findingLabels) as Finding[];
-export const pipeWorkOrder = Object.keys(pipeWorkLabels) as PipeWork[];
+export const originOrder: readonly Origin[] = origins;
+export const findingOrder: readonly Finding[] = findings;
+export const pipeWorkOrder: readonly PipeWork[] = pipeWorks;
 
 /** "Swell to Great", "Swell Octave", "Swell to Pedal Sub Octave": the trade's names for couplers. */
 export function couplerName(c: { from: string; to: string; octave: -1 | 0 | 1 }, divisions: readonly { id: string; name: string }[]): string {

@@ -26,6 +26,8 @@ export type FigureSource = { kind: "live"; rates: Rates } | { kind: "fixed"; fig
 export type FigureState = { figures: Figures | null; stale: boolean };
 
 type Job = { doc: SchemeDocument; tuning: Tuning };
+/** The same document (by identity: documents are immutable) at the same tuning. */
+const sameJob = (a: Job | null, doc: SchemeDocument, tuning: Tuning) => !!a && a.doc === doc && a.tuning.pitchHz === tuning.pitchHz && a.tuning.temperatureC === tuning.temperatureC;
 
 /** Only for a browser without workers: the estimator is loaded then, so the editor's first scripts leave it to the worker. */
 async function estimateHere(job: Job, rates: Rates): Promise<Figures> {
@@ -91,8 +93,7 @@ export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSo
   /** Asks the worker for the figures of `job` (once per document), now or after the job it is on. */
   const request = useCallback(
     (w: Worker, job: Job) => {
-      const last = asked.current;
-      if (last && last.doc === job.doc && last.tuning.pitchHz === job.tuning.pitchHz && last.tuning.temperatureC === job.tuning.temperatureC) return;
+      if (sameJob(asked.current, job.doc, job.tuning)) return;
       asked.current = job;
       const s = ++seq.current;
       jobs.current.set(s, job);
@@ -175,7 +176,7 @@ export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSo
 
   if (source.kind === "fixed") return { figures: source.figures, stale: false, ahead };
   const shownFor = live.job;
-  const stale = live.figures === null || !shownFor || shownFor.doc !== doc || shownFor.tuning.pitchHz !== pitchHz || shownFor.tuning.temperatureC !== temperatureC;
+  const stale = live.figures === null || !sameJob(shownFor, doc, tuning);
   return { figures: live.figures, stale, ahead };
 }
 

@@ -176,9 +176,8 @@ export async function getPricingRates({ rateSetId }: { rateSetId?: string | null
       .select(pricingColumns)
       .from(rateSets)
       .innerJoin(rateSetVersions, and(eq(rateSetVersions.rateSetId, rateSets.id), eq(rateSetVersions.version, rateSets.version)))
-      .where(rateSetId ? eq(rateSets.id, rateSetId) : undefined)
-      // The current set first; when none is marked current, the oldest.
-      .orderBy(desc(rateSets.isCurrent), asc(rateSets.createdAt))
+      // The set asked for, or the one rule for the set priced with by default.
+      .where(rateSetId ? eq(rateSets.id, rateSetId) : eq(rateSetVersions.id, currentPricingVersionId))
       .limit(1);
   let [row] = await find();
   if (!row && !rateSetId) {
