@@ -117,21 +117,29 @@ test("at 390 px no page scrolls sideways, for each role", async ({ browser }) =>
   }
 });
 
-test("at 390 px the project page with two schemes, the quotation, survey files, import and rate-set pages fit the screen", async ({ browser }) => {
-  test.setTimeout(120_000);
+/**
+ * A project with two schemes (the project page then offers Compare beside its heading), its estimator
+ * a member, and a draft quotation of the first scheme on a rate set of their own.
+ */
+async function pricedProject(name: string) {
   const designer = await makeUser("designer");
   const estimator = await makeUser("estimator");
-  const { cookie, projectId, schemeId } = await projectWithScheme(designer, restoreScheme, `Phone pages ${uid()}`);
-  // Two schemes: the project page then offers Compare beside its heading.
+  const { cookie, projectId, schemeId } = await projectWithScheme(designer, restoreScheme, name);
   await addScheme(cookie, projectId, { ...restoreScheme, name: "Second scheme" });
   expect((await api(`/api/projects/${projectId}/members`, { method: "POST", cookie, body: { email: estimator.email } })).status).toBe(200);
   const ec = await signIn(estimator);
-  const set = (await api("/api/rate-sets", { method: "POST", cookie: ec, body: { name: `Phone rates ${uid()}` } })).json.rateSet;
+  const set = (await api("/api/rate-sets", { method: "POST", cookie: ec, body: { name: `Rates of ${name}` } })).json.rateSet;
   const quotation = await api(`/api/projects/${projectId}/quotations`, { method: "POST", cookie: ec, body: { schemeId, rateSetId: set.id } });
   expect(quotation.status).toBe(201);
+  return { designer, estimator, projectId, set, quotationId: quotation.json.quotation.id as string };
+}
+
+test("at 390 px the project page with two schemes, the quotation, survey files, import and rate-set pages fit the screen", async ({ browser }) => {
+  test.setTimeout(120_000);
+  const { designer, estimator, projectId, set, quotationId } = await pricedProject(`Phone pages ${uid()}`);
   const pages: [typeof designer, string[]][] = [
     [designer, [`/projects/${projectId}`, `/projects/${projectId}/files`, `/projects/${projectId}/import`]],
-    [estimator, [`/projects/${projectId}/quotations/${quotation.json.quotation.id}`, "/rates", `/rates/${set.id}`]],
+    [estimator, [`/projects/${projectId}/quotations/${quotationId}`, "/rates", `/rates/${set.id}`]],
   ];
   for (const [user, paths] of pages) {
     const ctx = await browser.newContext({ viewport: { width: 390, height: 844 } });
@@ -158,14 +166,7 @@ async function boxesScrollingSideways(page: Page): Promise<string[]> {
 
 test("at 390 px the project list, the schemes and the quotations read as cards, with nothing cut off at the edge", async ({ browser }) => {
   test.setTimeout(120_000);
-  const designer = await makeUser("designer");
-  const estimator = await makeUser("estimator");
-  const { cookie, projectId, schemeId } = await projectWithScheme(designer, restoreScheme, `Phone cards ${uid()}`);
-  await addScheme(cookie, projectId, { ...restoreScheme, name: "Second scheme" });
-  expect((await api(`/api/projects/${projectId}/members`, { method: "POST", cookie, body: { email: estimator.email } })).status).toBe(200);
-  const ec = await signIn(estimator);
-  const set = (await api("/api/rate-sets", { method: "POST", cookie: ec, body: { name: `Card rates ${uid()}` } })).json.rateSet;
-  expect((await api(`/api/projects/${projectId}/quotations`, { method: "POST", cookie: ec, body: { schemeId, rateSetId: set.id } })).status).toBe(201);
+  const { designer, estimator, projectId } = await pricedProject(`Phone cards ${uid()}`);
 
   const ctx = await browser.newContext({ viewport: { width: 390, height: 844 } });
   const page = await ctx.newPage();
