@@ -47,12 +47,24 @@ export function columnFiguresOf(figures: Figures | null): Map<string, ColumnFigu
   return out;
 }
 
+function sameTexts(a: Readonly<Record<string, string>>, b: Readonly<Record<string, string>>): boolean {
+  const keys = Object.keys(a);
+  if (keys.length !== Object.keys(b).length) return false;
+  for (const k of keys) if (a[k] !== b[k]) return false;
+  return true;
+}
+
+/** Field by field: these are all the fields of ColumnFigures. */
+function sameColumn(a: ColumnFigures, b: ColumnFigures): boolean {
+  return a.notes === b.notes && a.pipesTotal === b.pipesTotal && a.fit === b.fit && a.hasChest === b.hasChest && a.words === b.words && sameTexts(a.pipesText, b.pipesText);
+}
+
 /** The new figures, each division's object kept from `before` when its content is the same. */
 export function keepUnchanged(before: ReadonlyMap<string, ColumnFigures>, after: Map<string, ColumnFigures>): Map<string, ColumnFigures> {
   const out = new Map<string, ColumnFigures>();
   for (const [id, value] of after) {
     const old = before.get(id);
-    out.set(id, old && JSON.stringify(old) === JSON.stringify(value) ? old : value);
+    out.set(id, old && sameColumn(old, value) ? old : value);
   }
   return out;
 }

@@ -6,6 +6,7 @@ import {
   DragOverlay,
   PointerSensor,
   pointerWithin,
+  useDraggable,
   useSensor,
   useSensors,
   type Announcements,
@@ -16,10 +17,10 @@ import {
   type UniqueIdentifier,
 } from "@dnd-kit/core";
 import { horizontalListSortingStrategy, SortableContext } from "@dnd-kit/sortable";
-import { memo, useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent } from "react";
+import { memo, useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent as ReactPointerEvent, type RefObject } from "react";
 import type { SchemeDocument } from "@/lib/spec/document";
 import type { ColumnFigures } from "./board-figures";
-import { CarryContext } from "./carry-context";
+import { BOARD_ID, CarryContext, StopPressContext } from "./carry-context";
 import { DivisionColumn } from "./division-column";
 import { DivisionPicker } from "./division-picker";
 import { findStop, moveDivision, moveStop } from "./doc-ops";
@@ -31,8 +32,32 @@ import { Treatment } from "./treatment-mark";
 /** A drag by the pointer (dnd-kit) or a carry by the keyboard (keyboard-carry.ts): the board shows `doc` meanwhile. */
 type DragState = { type: "stop" | "division"; id: string; doc: SchemeDocument; by: "pointer" | "keyboard" };
 
-const idOf = (dndId: UniqueIdentifier) => String(dndId).replace(/^(stop|div):/, "");
+/** dnd-kit's id for whichever stop is dragged: the stop itself is the one the board was handed (StopDragSource). */
+const STOP_DRAG_ID = "stop";
+const idOf = (dndId: UniqueIdentifier) => String(dndId).replace(/^div:/, "");
 const typeOf = (dndId: UniqueIdentifier) => (String(dndId).startsWith("div:") ? "division" : "stop");
+
+/** The board's one stop draggable, as dnd-kit hands it out. */
+type DragSource = Pick<ReturnType<typeof useDraggable>, "listeners" | "setNodeRef" | "setActivatorNodeRef">;
+
+/**
+ * The one draggable dnd-kit knows for stops. A grip pressed by the pointer points it at its card and
+ * hands it the press (pressStop), so dnd-kit drags that card as it would a card with its own hook,
+ * while the 150 grips read no dnd-kit context and draw nothing when a drag starts or ends.
+ */
+function StopDragSource({ sourceRef }: { sourceRef: RefObject<DragSource | null> }) {
+  const { listeners, setNodeRef, setActivatorNodeRef } = useDraggable({ id: STOP_DRAG_ID, data: { type: "stop" } });
+  useLayoutEffect(() => {
+    sourceRef.current = { listeners, setNodeRef, setActivatorNodeRef };
+  }, [sourceRef, listeners, setNodeRef, setActivatorNodeRef]);
+  return null;
+}
+
+/**
+ * The pointer sensor's options, one object for the page: a new object would make new sensors on every
+ * draw of the board, and with them new listeners for every grip, so each of 150 grips drew again on a drop.
+ */
+const pointerSensorOptions = { activationConstraint: { distance: 4 } };
 
 /** Where a stop dragged by the pointer would land: a division and an index in its list as shown (the dragged card counted). */
 type DropAt = { divisionId: string; index: number };
@@ -103,10 +128,26 @@ export const DivisionBoard = memo(function DivisionBoard({
   const [picked, setPicked] = useState<string | null>(null);
   const boardRef = useRef<HTMLDivElement>(null);
   const focusAfter = useRef<string | null>(null);
+  const dragSource = useRef<DragSource | null>(null);
+  /** The stop whose grip was pressed last, and its card: what the stop draggable stands for. */
+  const pressed = useRef<{ id: string; card: HTMLElement | null }>({ id: "", card: null });
+  const pressStop = useCallback((e: ReactPointerEvent<HTMLButtonElement>) => {
+    const source = dragSource.current;
+    const id = e.currentTarget.dataset.carryId;
+    if (!source?.listeners || !id) return;
+    const card = e.currentTarget.closest<HTMLElement>("li[data-stop-id]");
+    pressed.current = { id, card };
+    source.setNodeRef(card);
+    source.setActivatorNodeRef(e.currentTarget);
+    (source.listeners.onPointerDown as ((e: ReactPointerEvent) => void) | undefined)?.(e);
+  }, []);
+  /** What a dnd-kit id stands for on this board. */
+  const draggedOf = (dndId: UniqueIdentifier): { type: "stop" | "division"; id: string } =>
+    dndId === STOP_DRAG_ID ? { type: "stop", id: pressed.current.id } : { type: typeOf(dndId), id: idOf(dndId) };
   const shown = drag?.doc ?? doc;
   const pickedId = shown.divisions.some((d) => d.id === picked) ? picked : (shown.divisions[0]?.id ?? null);
   // The pointer only: the keyboard carries through onBoardKeyDown, which never loses a key.
-  const sensors = useSensors(useSensor(PointerSensor, { activationConstraint: { distance: 4 } }));
+  const sensors = useSensors(useSensor(PointerSensor, pointerSensorOptions));
 
   // While a stop is dragged, where it would land follows the pointer: read once a frame from the
   // cards of the column under it, set only when it changes (one column redraws its drop line).
@@ -143,15 +184,17 @@ export const DivisionBoard = memo(function DivisionBoard({
     };
   }, [draggingStop, schedule]);
 
-  const nameOf = useMemo(() => {
-    return (dndId: UniqueIdentifier | undefined): string => {
-      if (dndId === undefined) return "";
-      const id = idOf(dndId);
-      if (typeOf(dndId) === "division") return `division ${shown.divisions.find((d) => d.id === id)?.name ?? ""}`;
-      const found = findStop(shown, id);
-      return found ? `${stopTitle(found.stop)} (${found.division.name})` : "";
-    };
-  }, [shown]);
+  /** A stop or division as the announcements name it. */
+  function nameOfItem(type: "stop" | "division", id: string): string {
+    if (type === "division") return `division ${shown.divisions.find((d) => d.id === id)?.name ?? ""}`;
+    const found = findStop(shown, id);
+    return found ? `${stopTitle(found.stop)} (${found.division.name})` : "";
+  }
+  const nameOf = (dndId: UniqueIdentifier | undefined): string => {
+    if (dndId === undefined) return "";
+    const { type, id } = draggedOf(dndId);
+    return nameOfItem(type, id);
+  };
 
   const announcements: Announcements = {
     onDragStart: ({ active }) => `Picked up ${nameOf(active.id)}. Arrow keys move it, Space drops it, Escape puts it back.`,
@@ -163,7 +206,10 @@ export const DivisionBoard = memo(function DivisionBoard({
   function onDragStart(e: DragStartEvent) {
     const start = e.activatorEvent as PointerEvent | null;
     pointer.current = { y: start?.clientY ?? 0, over: null, frame: 0 };
-    setDrag({ type: typeOf(e.active.id), id: idOf(e.active.id), doc, by: "pointer" });
+    const dragged = draggedOf(e.active.id);
+    // The card left behind shows as a dashed ghost: one attribute, no redraw.
+    if (dragged.type === "stop") pressed.current.card?.toggleAttribute("data-dragging", true);
+    setDrag({ ...dragged, doc, by: "pointer" });
   }
 
   /** Commits a finished move of a stop as one edit, labelled with where it went. */
@@ -191,15 +237,15 @@ export const DivisionBoard = memo(function DivisionBoard({
       const type = handle.dataset.carryType === "division" ? "division" : "stop";
       const id = handle.dataset.carryId!;
       setDrag({ type, id, doc, by: "keyboard" });
-      setSpoken(`Picked up ${nameOf(`${type === "division" ? "div" : "stop"}:${id}`)}. Up and down arrows move it within its division, left and right to the next division; Space drops it, Escape puts it back.`);
+      setSpoken(`Picked up ${nameOfItem(type, id)}. Up and down arrows move it within its division, left and right to the next division; Space drops it, Escape puts it back.`);
       return;
     }
-    const dndId = `${carried.type === "division" ? "div" : "stop"}:${carried.id}`;
+    const name = nameOfItem(carried.type, carried.id);
     if (isCarryKey(key)) {
       e.preventDefault();
       const next = carryStep(carried.doc, carried, key);
       if (next === carried.doc) {
-        setSpoken(`${nameOf(dndId)} cannot go further that way.`);
+        setSpoken(`${name} cannot go further that way.`);
         return;
       }
       focusAfter.current = carried.id;
@@ -207,12 +253,12 @@ export const DivisionBoard = memo(function DivisionBoard({
       // On a phone the board shows one division: it follows a stop carried to another.
       const now = carried.type === "stop" ? findStop(next, carried.id)?.division.id : null;
       if (now) setPicked(now);
-      setSpoken(`${nameOf(dndId)}: ${carryPlace(next, carried)}.`);
+      setSpoken(`${name}: ${carryPlace(next, carried)}.`);
     } else if (key === " " || key === "Enter") {
       e.preventDefault();
       focusAfter.current = carried.id;
       setDrag(null);
-      setSpoken(`Dropped ${nameOf(dndId)}, ${carryPlace(carried.doc, carried)}.`);
+      setSpoken(`Dropped ${name}, ${carryPlace(carried.doc, carried)}.`);
       if (carried.type === "division") {
         const from = doc.divisions.findIndex((d) => d.id === carried.id);
         const to = carried.doc.divisions.findIndex((d) => d.id === carried.id);
@@ -222,7 +268,7 @@ export const DivisionBoard = memo(function DivisionBoard({
       if (key === "Escape") e.preventDefault();
       focusAfter.current = key === "Escape" ? carried.id : null;
       setDrag(null);
-      setSpoken(`Moving ${nameOf(dndId)} cancelled; it is back where it was.`);
+      setSpoken(`Moving ${name} cancelled; it is back where it was.`);
     }
   }
 
@@ -242,6 +288,7 @@ export const DivisionBoard = memo(function DivisionBoard({
   }
 
   function endPointerDrag() {
+    pressed.current.card?.toggleAttribute("data-dragging", false);
     setDrag(null);
     setDropAt(null);
     pointer.current.over = null;
@@ -286,7 +333,7 @@ export const DivisionBoard = memo(function DivisionBoard({
 
   return (
     <DndContext
-      id="scheme-board"
+      id={BOARD_ID}
       sensors={sensors}
       collisionDetection={collision}
       onDragStart={onDragStart}
@@ -301,7 +348,9 @@ export const DivisionBoard = memo(function DivisionBoard({
       }}
     >
       <p className="sr-only" aria-live="assertive" data-testid="carry-status">{spoken}</p>
+      {editable && <StopDragSource sourceRef={dragSource} />}
       <DivisionPicker divisions={shown.divisions} columnFigures={columnFigures} picked={pickedId} onPick={setPicked} boardRef={boardRef} />
+      <StopPressContext.Provider value={editable ? pressStop : null}>
       <CarryContext.Provider value={carried}>
       <SortableContext items={sortableIds} strategy={horizontalListSortingStrategy}>
         <div
@@ -328,6 +377,7 @@ export const DivisionBoard = memo(function DivisionBoard({
         </div>
       </SortableContext>
       </CarryContext.Provider>
+      </StopPressContext.Provider>
       <DragOverlay dropAnimation={null}>
         {activeStop ? (
           <div className="w-[15rem] rounded border border-brass bg-paper-card px-2 py-1.5 shadow-lg">

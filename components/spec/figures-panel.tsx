@@ -50,17 +50,29 @@ export const FiguresPanel = memo(function FiguresPanel({ figures, showMoney, sta
       </section>
     );
   }
-  const e = figures.estimate;
-  const t = e.totals;
-  const clashes = e.divisions.filter((d) => d.chest.fit && !d.chest.fit.fits);
-  const metals = (Object.entries(t.metalKg) as [keyof typeof materialLabels, number][]).filter(([, kg]) => kg > 0);
-  const woods = (Object.entries(t.woodM3) as [keyof typeof materialLabels, number][]).filter(([, m3]) => m3 > 0);
   return (
     <section className="panel text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="ok" data-stale={stale ? "true" : undefined} data-estimate-ms={figures.ms.toFixed(1)} aria-busy={stale || undefined}>
       <div className="flex items-baseline border-b border-tin-rule px-3 py-2">
         <h2 id="figures-heading" className="flex-1 text-lg font-semibold">Figures</h2>
         <span className={`text-xs ${stale ? "text-caution" : "text-tin"}`} title="Computed in the browser on every change">{stale ? "updating…" : "live"}</span>
       </div>
+      <FiguresBody figures={figures} showMoney={showMoney} />
+    </section>
+  );
+});
+
+/**
+ * The figures themselves. Memoised apart from the panel's frame: an edit marks the figures stale at
+ * once (the frame's "updating…"), which draws no figure again until the new ones arrive.
+ */
+const FiguresBody = memo(function FiguresBody({ figures, showMoney }: { figures: Extract<Figures, { ok: true }>; showMoney: boolean }) {
+  const e = figures.estimate;
+  const t = e.totals;
+  const clashes = e.divisions.filter((d) => d.chest.fit && !d.chest.fit.fits);
+  const metals = (Object.entries(t.metalKg) as [keyof typeof materialLabels, number][]).filter(([, kg]) => kg > 0);
+  const woods = (Object.entries(t.woodM3) as [keyof typeof materialLabels, number][]).filter(([, m3]) => m3 > 0);
+  return (
+    <>
       {clashes.length > 0 && (
         <p role="alert" className="flex items-start gap-1.5 border-b border-clash/40 bg-clash-light px-3 py-2 font-semibold text-clash" data-testid="fit-warning">
           <StateMark kind="clash" className="mt-0.5 h-4 w-4" />
@@ -171,6 +183,6 @@ export const FiguresPanel = memo(function FiguresPanel({ figures, showMoney, sta
         {e.cautions.map((c) => <Caution key={c.code}>{c.text}</Caution>)}
         <p className="text-[11px] text-tin num" suppressHydrationWarning>Computed in {formatNumber(figures.ms, 1)} ms.</p>
       </div>
-    </section>
+    </>
   );
 });

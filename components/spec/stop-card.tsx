@@ -1,22 +1,15 @@
 "use client";
-import { useDraggable } from "@dnd-kit/core";
-import { memo, useCallback, useContext, useLayoutEffect, type MouseEvent } from "react";
+import { memo, useContext, type MouseEvent, type PointerEvent } from "react";
 import type { DocStop } from "@/lib/spec/document";
-import { CarryContext } from "./carry-context";
+import { BOARD_ID, CarryContext, StopPressContext } from "./carry-context";
 import { stopTitle } from "./format";
 import { Pitch } from "./pitch";
 import { Treatment } from "./treatment-mark";
 
 export { pipesWords } from "./board-figures";
 
-// One element for every grip: React skips an unchanged element, so a grip drawn again redraws no dots.
-const gripDots = (
-  <svg viewBox="0 0 10 16" className="h-4 w-2.5" aria-hidden="true" fill="currentColor">
-    <circle cx="2.5" cy="3" r="1.3" /><circle cx="7.5" cy="3" r="1.3" />
-    <circle cx="2.5" cy="8" r="1.3" /><circle cx="7.5" cy="8" r="1.3" />
-    <circle cx="2.5" cy="13" r="1.3" /><circle cx="7.5" cy="13" r="1.3" />
-  </svg>
-);
+// One element for every grip: React skips an unchanged element. The dots are a mask (globals.css).
+const gripDots = <span className="mark mark-grip h-4 w-2.5 align-middle" aria-hidden="true" />;
 
 /**
  * A grip pressed by the pointer does not take the focus (the keyboard still reaches it by Tab): a
@@ -27,8 +20,8 @@ const keepFocus = (e: MouseEvent) => e.preventDefault();
 
 /**
  * The grip of a stop or a division: the pointer drags it (dnd-kit), the keyboard carries it
- * (division-board.tsx). Memoised on primitive props: when a drag starts or ends every grip's
- * dnd-kit hook runs again, but a grip whose props are the same draws nothing again.
+ * (division-board.tsx). A division's grip is wired by its column's sortable hook (listeners,
+ * attributes); a stop's grip only hands its press to the board (onPress).
  */
 export const DragHandle = memo(function DragHandle({
   label,
@@ -37,6 +30,7 @@ export const DragHandle = memo(function DragHandle({
   listeners,
   attributes,
   setRef,
+  onPress,
 }: {
   label: string;
   carryType: "stop" | "division";
@@ -44,6 +38,7 @@ export const DragHandle = memo(function DragHandle({
   listeners?: object;
   attributes?: object;
   setRef?: (el: HTMLElement | null) => void;
+  onPress?: ((e: PointerEvent<HTMLButtonElement>) => void) | null;
 }) {
   return (
     <button
@@ -51,6 +46,7 @@ export const DragHandle = memo(function DragHandle({
       ref={setRef}
       aria-label={label}
       className="-my-1 cursor-grab touch-none rounded px-1 py-1 text-tin hover:bg-paper-deep hover:text-ink active:cursor-grabbing"
+      {...(onPress ? { "aria-roledescription": "draggable", "aria-describedby": BOARD_ID, onPointerDown: onPress } : {})}
       {...attributes}
       {...listeners}
       onMouseDown={keepFocus}
@@ -91,35 +87,21 @@ const CardBody = memo(function CardBody({ stop, pipesText, editable, onOpen }: {
 });
 
 /**
- * The grip of a stop: the one part of a card wired to dnd-kit. useDraggable reads dnd-kit's context,
- * which changes when a drag starts, crosses a column or ends; kept in this small component, only the
- * 150 grips are drawn again then, never the cards. Its node is the card (for the overlay's start).
+ * The grip of a stop. It reads no dnd-kit context: with 150 stops, a hook per grip drew every grip
+ * again whenever a drag started, crossed a column or ended. The board's one stop draggable takes the
+ * press instead (division-board.tsx), and marks the card left behind.
  */
-const StopGrip = memo(function StopGrip({ stop, disabled }: { stop: DocStop; disabled: boolean }) {
-  const { attributes, listeners, setNodeRef, setActivatorNodeRef, isDragging, node } = useDraggable({
-    id: `stop:${stop.id}`,
-    data: { type: "stop", stopId: stop.id },
-    disabled,
-  });
-  const setRef = useCallback(
-    (el: HTMLElement | null) => {
-      setActivatorNodeRef(el);
-      setNodeRef(el?.closest("li") ?? null);
-    },
-    [setActivatorNodeRef, setNodeRef],
-  );
-  // The card left behind shows as a dashed ghost: one attribute on one element, no redraw of the card.
-  useLayoutEffect(() => {
-    node.current?.toggleAttribute("data-dragging", isDragging);
-  }, [isDragging, node]);
-  return <DragHandle label={`Move ${stopTitle(stop)}`} carryType="stop" carryId={stop.id} listeners={listeners} attributes={attributes} setRef={setRef} />;
+const StopGrip = memo(function StopGrip({ stop }: { stop: DocStop }) {
+  const press = useContext(StopPressContext);
+  return <DragHandle label={`Move ${stopTitle(stop)}`} carryType="stop" carryId={stop.id} onPress={press} />;
 });
 
 /**
- * A stop on the board. Cards out of sight are neither laid out nor painted (content-visibility), so
- * a drop or a hover repaints what is on the screen, not 150 cards. Only its grip is wired to the pointer (StopGrip); where it lands is worked
- * out by the board from the pointer, so no card is measured or redrawn while the pointer moves. The
- * card being dragged is marked by its grip with an attribute (data-dragging), not by a redraw.
+ * A stop on the board. Its layout and paint are contained, so a change inside one card is laid out
+ * and painted within it. (content-visibility: auto cost more than it saved here: each drop moved cards
+ * in and out of sight, and the browser drew a second frame to paint them.) Where a dragged card lands is worked out by the board from the pointer, so no card is
+ * measured or redrawn while the pointer moves; the card being dragged is marked by the board with an
+ * attribute (data-dragging), not by a redraw.
  */
 export const StopCard = memo(function StopCard({
   stop,
@@ -138,7 +120,7 @@ export const StopCard = memo(function StopCard({
   const isCarried = carried?.type === "stop" && carried.id === stop.id;
   return (
     <li
-      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] [contain-intrinsic-size:auto_3.25rem] [content-visibility:auto] data-[dragging]:border-dashed data-[dragging]:border-brass data-[dragging]:opacity-40 ${isCarried ? "border-brass ring-2 ring-brass/60" : "border-tin-rule"}`}
+      className={`flex items-start gap-1.5 rounded border bg-paper-card px-2 py-1.5 shadow-[0_1px_0_rgba(29,36,51,0.05)] [contain:layout_paint] data-[dragging]:border-dashed data-[dragging]:border-brass data-[dragging]:opacity-40 ${isCarried ? "border-brass ring-2 ring-brass/60" : "border-tin-rule"}`}
       data-carried={isCarried || undefined}
       data-testid={`stop-${stop.name}`}
       data-stop-id={stop.id}
@@ -146,7 +128,7 @@ export const StopCard = memo(function StopCard({
     >
       {editable && (
         <span className="pt-0.5">
-          <StopGrip stop={stop} disabled={!editable} />
+          <StopGrip stop={stop} />
         </span>
       )}
       <CardBody stop={stop} pipesText={pipesText} editable={editable} onOpen={onOpen} />

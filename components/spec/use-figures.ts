@@ -6,6 +6,7 @@
  * has loaded, so neither the server nor hydration waits for an estimate.
  */
 import { useCallback, useEffect, useRef, useState } from "react";
+import { flushSync } from "react-dom";
 import type { Estimate, Rates } from "@/lib/estimate";
 import type { SchemeDocument, Tuning } from "@/lib/spec/document";
 import type { DrawingRules, EstimateWithoutMoney } from "@/lib/spec/estimate";
@@ -121,7 +122,9 @@ export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSo
       if (queued) send(w, queued.seq, queued.job);
       setLive((prev) => (s < prev.seq ? prev : { seq: s, job, figures: result.ok ? { ok: true, estimate: result.estimate, ms } : result }));
     };
-    w.onmessage = (e: MessageEvent<WorkerAnswer>) => onAnswer(e.data);
+    // Drawn in the worker's own message task: a task React scheduled after it would wait behind
+    // the frames the browser draws first after a drop, and the new figures with it.
+    w.onmessage = (e: MessageEvent<WorkerAnswer>) => flushSync(() => onAnswer(e.data));
     worker.current = w;
     next.current = null;
     jobs.current.clear();
