@@ -62,6 +62,14 @@ const pointerSensorOptions = { activationConstraint: { distance: 4 } };
 /** Where a stop dragged by the pointer would land: a division and an index in its list as shown (the dragged card counted). */
 type DropAt = { divisionId: string; index: number };
 
+/** The document with stop `stopId` dropped at `at`; moveStop counts the target's stops without the moved one. */
+function landed(doc: SchemeDocument, stopId: string, at: DropAt): SchemeDocument | null {
+  const from = findStop(doc, stopId);
+  if (!from) return null;
+  const index = from.division.id === at.divisionId && from.index < at.index ? at.index - 1 : at.index;
+  return moveStop(doc, stopId, at.divisionId, index);
+}
+
 /**
  * Divisions are sorted among themselves; a stop is over the column under the pointer (or the
  * nearest). Only the columns are drop targets, so crossing stops changes nothing dnd-kit tracks.
@@ -96,6 +104,7 @@ export const DivisionBoard = memo(function DivisionBoard({
   columnFigures,
   editable,
   onChange,
+  onGuess,
   onEditDivision,
   onAddStop,
   onOpenStop,
@@ -104,6 +113,11 @@ export const DivisionBoard = memo(function DivisionBoard({
   columnFigures: Map<string, ColumnFigures>;
   editable: boolean;
   onChange: (doc: SchemeDocument, label: string) => void;
+  /**
+   * Told of the document a drop would make, while the stop is still carried, so its figures can be
+   * worked out before the drop; the drop then hands over that very document. Stable.
+   */
+  onGuess: (doc: SchemeDocument) => void;
   /** Stable callbacks (the columns are memoised on them). */
   onEditDivision: (divisionId: string) => void;
   onAddStop: (divisionId: string) => void;
@@ -149,6 +163,13 @@ export const DivisionBoard = memo(function DivisionBoard({
   // The pointer only: the keyboard carries through onBoardKeyDown, which never loses a key.
   const sensors = useSensors(useSensor(PointerSensor, pointerSensorOptions));
 
+  // The document the last place under the pointer would make (its figures are being worked out).
+  const guessRef = useRef<{ base: SchemeDocument; stopId: string; at: DropAt; doc: SchemeDocument } | null>(null);
+  /** The guess for stop `stopId` dropped at `at` on `base`, if that is the one made. */
+  const guessFor = (base: SchemeDocument, stopId: string, at: DropAt) => {
+    const g = guessRef.current;
+    return g && g.base === base && g.stopId === stopId && g.at.divisionId === at.divisionId && g.at.index === at.index ? g.doc : null;
+  };
   // While a stop is dragged, where it would land follows the pointer: read once a frame from the
   // cards of the column under it, set only when it changes (one column redraws its drop line).
   const pointer = useRef<{ y: number; over: string | null; frame: number }>({ y: 0, over: null, frame: 0 });
@@ -162,8 +183,16 @@ export const DivisionBoard = memo(function DivisionBoard({
     const from = findStop(d.doc, d.id);
     // Just before or after itself is where it already is: no line.
     if (from && from.division.id === over && (index === from.index || index === from.index + 1)) index = -1;
-    setDropAt(index < 0 ? { divisionId: over, index: -1 } : { divisionId: over, index });
-  }, [setDropAt]);
+    const at = index < 0 ? { divisionId: over, index: -1 } : { divisionId: over, index };
+    setDropAt(at);
+    if (index >= 0 && !guessFor(d.doc, d.id, at)) {
+      const doc = landed(d.doc, d.id, at);
+      if (doc) {
+        guessRef.current = { base: d.doc, stopId: d.id, at, doc };
+        onGuess(doc);
+      }
+    }
+  }, [setDropAt, onGuess]);
   const schedule = useCallback(() => {
     if (!pointer.current.frame) pointer.current.frame = requestAnimationFrame(place);
   }, [place]);
@@ -250,6 +279,7 @@ export const DivisionBoard = memo(function DivisionBoard({
       }
       focusAfter.current = carried.id;
       setDrag({ ...carried, doc: next });
+      onGuess(next);
       // On a phone the board shows one division: it follows a stop carried to another.
       const now = carried.type === "stop" ? findStop(next, carried.id)?.division.id : null;
       if (now) setPicked(now);
@@ -311,11 +341,9 @@ export const DivisionBoard = memo(function DivisionBoard({
       return;
     }
     if (!at || at.index < 0) return;
-    const from = findStop(doc, state.id);
-    if (!from) return;
-    // moveStop counts the target's stops without the moved one.
-    const index = from.division.id === at.divisionId && from.index < at.index ? at.index - 1 : at.index;
-    commitStop(state.id, moveStop(doc, state.id, at.divisionId, index));
+    // The very document guessed for this place, whose figures may be ready already.
+    const next = guessFor(doc, state.id, at) ?? landed(doc, state.id, at);
+    if (next) commitStop(state.id, next);
   }
 
   const activeStop = drag?.by === "pointer" && drag.type === "stop" ? findStop(shown, drag.id)?.stop : undefined;
@@ -325,7 +353,6 @@ export const DivisionBoard = memo(function DivisionBoard({
   const carriedId = carriedBy?.id;
   // One object per carried item, not per step, so the cards re-render only when it changes.
   const carried = useMemo<Carried | null>(() => (carriedType && carriedId ? { type: carriedType, id: carriedId } : null), [carriedType, carriedId]);
-  const activeType = drag?.type ?? null;
   // The same list while the order of divisions is the same: a move of a stop makes a new divisions
   // array, which would otherwise make every column's sortable hook run again on the drop.
   const divisionOrder = shown.divisions.map((d) => d.id).join("\n");
@@ -366,7 +393,6 @@ export const DivisionBoard = memo(function DivisionBoard({
               division={division}
               figures={columnFigures.get(division.id)}
               editable={editable}
-              activeType={activeType}
               dropIndex={dropAt?.divisionId === division.id ? dropAt.index : null}
               picked={division.id === pickedId}
               onEditDivision={onEditDivision}

@@ -1,7 +1,7 @@
 "use client";
 import { useSortable } from "@dnd-kit/sortable";
 import { CSS } from "@dnd-kit/utilities";
-import { Fragment, memo, startTransition, useEffect, useState } from "react";
+import { Fragment, memo, startTransition, useCallback, useEffect, useLayoutEffect, useRef, useState } from "react";
 import { StateMark } from "@/components/ui/state-mark";
 import type { DocDivision } from "@/lib/spec/document";
 import type { ColumnFigures } from "./board-figures";
@@ -32,15 +32,48 @@ const FIRST_CARDS = 16;
 const CARDS_PER_BATCH = 8;
 
 /**
- * One division on the board. Memoised: it is drawn again only when its division, its figures, the
- * drop line in it or the kind of drag changes, never for a move in another column. On a phone only
- * the division picked in the picker is shown.
+ * The grip of a division and its column's place in dnd-kit: the one part of a column that reads
+ * dnd-kit's context, which changes whenever a drag starts, crosses a column or ends. What it changes
+ * on the column (its node, its shift while divisions are sorted, whether it is lifted or has a stop
+ * over it) it sets on the column's element, so the column and its cards are not drawn again for it.
+ */
+function DivisionGrip({ division }: { division: DocDivision }) {
+  const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging, isOver, active } = useSortable({
+    id: `div:${division.id}`,
+    data: { type: "division", divisionId: division.id },
+  });
+  // The grip's column is the sortable node (the grip is in its header).
+  const sectionRef = useRef<HTMLElement | null>(null);
+  const setRef = useCallback(
+    (el: HTMLElement | null) => {
+      sectionRef.current = el?.closest("section") ?? null;
+      setActivatorNodeRef(el);
+      setNodeRef(sectionRef.current);
+    },
+    [setActivatorNodeRef, setNodeRef],
+  );
+  const stopOver = isOver && active !== null && !String(active.id).startsWith("div:");
+  const shift = CSS.Translate.toString(transform) ?? "";
+  useLayoutEffect(() => {
+    const el = sectionRef.current;
+    if (!el) return;
+    el.style.transform = shift;
+    el.style.transition = transition ?? "";
+    el.toggleAttribute("data-lifted", isDragging);
+    el.toggleAttribute("data-stop-over", stopOver);
+  }, [shift, transition, isDragging, stopOver]);
+  return <DragHandle label={`Move division ${division.name}`} carryType="division" carryId={division.id} listeners={listeners} attributes={attributes} setRef={setRef} />;
+}
+
+/**
+ * One division on the board. Memoised: it is drawn again only when its division, its figures or the
+ * drop line in it changes, never for a move in another column nor for a drag starting or ending
+ * (DivisionGrip). On a phone only the division picked in the picker is shown.
  */
 export const DivisionColumn = memo(function DivisionColumn({
   division,
   figures,
   editable,
-  activeType,
   dropIndex,
   picked,
   onEditDivision,
@@ -50,7 +83,6 @@ export const DivisionColumn = memo(function DivisionColumn({
   division: DocDivision;
   figures: ColumnFigures | undefined;
   editable: boolean;
-  activeType: "stop" | "division" | null;
   /** Where a stop dragged by the pointer would go, as an index in this column's list; null when not here. */
   dropIndex: number | null;
   /** The division shown on a phone. */
@@ -59,11 +91,6 @@ export const DivisionColumn = memo(function DivisionColumn({
   onAddStop: (divisionId: string) => void;
   onOpenStop: (stopId: string) => void;
 }) {
-  const { attributes, listeners, setNodeRef, setActivatorNodeRef, transform, transition, isDragging, isOver } = useSortable({
-    id: `div:${division.id}`,
-    data: { type: "division", divisionId: division.id },
-    disabled: editable ? { draggable: false, droppable: false } : true,
-  });
   const [shown, setShown] = useState(FIRST_CARDS);
   const stopCount = division.stops.length;
   useEffect(() => {
@@ -72,19 +99,16 @@ export const DivisionColumn = memo(function DivisionColumn({
   }, [shown, stopCount]);
   const stops = shown >= stopCount ? division.stops : division.stops.slice(0, shown);
   const state = figures?.fit ?? "unknown";
-  const stopOver = activeType === "stop" && dropIndex !== null;
   return (
     <section
-      ref={setNodeRef}
-      style={{ transform: CSS.Translate.toString(transform), transition }}
-      className={`${picked ? "flex" : "hidden"} min-w-0 flex-col rounded-md border bg-paper-deep/60 md:flex ${isDragging ? "z-20 border-brass opacity-90 shadow-lg" : stopOver || (isOver && activeType === "stop") ? "border-brass" : state === "clash" ? "border-clash" : "border-tin-rule"}`}
+      className={`${picked ? "flex" : "hidden"} min-w-0 flex-col rounded-md border bg-paper-deep/60 md:flex data-[lifted]:z-20 data-[lifted]:border-brass data-[lifted]:opacity-90 data-[lifted]:shadow-lg data-[stop-over]:border-brass ${dropIndex !== null ? "border-brass" : state === "clash" ? "border-clash" : "border-tin-rule"}`}
       data-testid={`division-${division.name}`}
       data-division-id={division.id}
       aria-labelledby={`div-title-${division.id}`}
     >
       <header className="border-b border-tin-rule px-2.5 pb-2 pt-2">
         <div className="flex items-center gap-1.5">
-          {editable && <DragHandle label={`Move division ${division.name}`} carryType="division" carryId={division.id} listeners={listeners} attributes={attributes} setRef={setActivatorNodeRef} />}
+          {editable && <DivisionGrip division={division} />}
           <h3 id={`div-title-${division.id}`} className="min-w-0 flex-1 truncate text-lg font-semibold" title={division.name}>{division.name}</h3>
           {editable && (
             <button type="button" className="btn px-2 py-0.5 text-xs" onClick={() => onEditDivision(division.id)} aria-label={`Edit division ${division.name}`}>

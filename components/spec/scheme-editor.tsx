@@ -9,7 +9,7 @@ import { DivisionBoard } from "./division-board";
 import { useColumnFigures } from "./board-figures";
 import { addDivision, addStop, findStop, moveStop, newId, removeDivision, removeStop, setAccessories, setWorks, updateDivision, updateStop } from "./doc-ops";
 import { FiguresPanel } from "./figures-panel";
-import { formatDateTime, formatTimeOfDay, stopTitle } from "./format";
+import { formatDateTime, formatNumber, formatTimeOfDay, stopTitle } from "./format";
 import { historyReducer, initHistory, nextRedo, nextUndo } from "./history";
 import { SaveStateBadge } from "./save-state";
 import { drawingRulesOf, useFigures, type FigureSource } from "./use-figures";
@@ -67,7 +67,7 @@ export function SchemeEditor({
   const doc = history.present;
   const save = useSchemeSave({ scheme: initialScheme, present: doc, label: history.label, enabled: editable });
   const { saveNow } = save;
-  const { figures, stale, ahead } = useFigures(doc, initialScheme.tuning, figureSource);
+  const { figures, stale, ahead, guess } = useFigures(doc, initialScheme.tuning, figureSource);
   const columnFigures = useColumnFigures(figures);
   const [figuresOpen, setFiguresOpen] = useState(false);
   const [tab, setTab] = useState<Tab>("stops");
@@ -327,6 +327,7 @@ export function SchemeEditor({
                   columnFigures={columnFigures}
                   editable={editable}
                   onChange={edit}
+                  onGuess={guess}
                   onEditDivision={editDivision}
                   onAddStop={addStopTo}
                   onOpenStop={openStop}
@@ -528,7 +529,7 @@ function FiguresSummary({ figures, stale }: { figures: ReturnType<typeof useFigu
   const clashes = figures.estimate.divisions.filter((d) => d.chest.fit && !d.chest.fit.fits).length;
   return (
     <span className={`num min-w-0 truncate ${stale ? "text-tin" : "text-ink-soft"}`}>
-      {t.stops} stops · {t.pipes.total.toLocaleString("en-GB")} pipes
+      {t.stops} stops · {formatNumber(t.pipes.total)} pipes
       {clashes > 0 && <span className="font-semibold text-clash"> · {clashes} {clashes === 1 ? "chest does" : "chests do"} not fit</span>}
     </span>
   );

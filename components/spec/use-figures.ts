@@ -26,7 +26,8 @@ export type FigureSource = { kind: "live"; rates: Rates } | { kind: "fixed"; fig
 /** The figures to show (null before the first arrive) and whether they are behind the document. */
 export type FigureState = { figures: Figures | null; stale: boolean };
 
-type Job = { doc: SchemeDocument; tuning: Tuning };
+/** A document to work out figures for; a guess is one that may never be shown (see `guess`). */
+type Job = { doc: SchemeDocument; tuning: Tuning; guess?: boolean };
 /** The same document (by identity: documents are immutable) at the same tuning. */
 const sameJob = (a: Job | null, doc: SchemeDocument, tuning: Tuning) => !!a && a.doc === doc && a.tuning.pitchHz === tuning.pitchHz && a.tuning.temperatureC === tuning.temperatureC;
 
@@ -58,7 +59,11 @@ function prime(job: Job, rates: Rates) {
   primed = p;
 }
 
-export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSource): FigureState & { ahead: (doc: SchemeDocument) => void } {
+export function useFigures(
+  doc: SchemeDocument,
+  tuning: Tuning,
+  source: FigureSource,
+): FigureState & { ahead: (doc: SchemeDocument) => void; guess: (doc: SchemeDocument) => void } {
   const { pitchHz, temperatureC } = tuning;
   // The figures shown and the document and tuning they were worked out for: they are stale while
   // that is not the document shown.
@@ -74,6 +79,10 @@ export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSo
   const asked = useRef<Job | null>(null);
   /** The document the worker holds, which the next is sent as a patch on (doc-patch.ts). */
   const held = useRef<SchemeDocument | null>(null);
+  /** The document shown, or about to be (ahead): answers for a guess of another are kept aside. */
+  const shown = useRef<SchemeDocument>(doc);
+  /** The latest guess and, once the worker has answered, its figures (with the answer's sequence number). */
+  const guessed = useRef<{ doc: SchemeDocument; answer: { seq: number; figures: Figures } | null } | null>(null);
   const tuningRef = useRef<Tuning>({ pitchHz, temperatureC });
   useEffect(() => {
     tuningRef.current = { pitchHz, temperatureC };
@@ -120,7 +129,13 @@ export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSo
       const queued = next.current;
       next.current = null;
       if (queued) send(w, queued.seq, queued.job);
-      setLive((prev) => (s < prev.seq ? prev : { seq: s, job, figures: result.ok ? { ok: true, estimate: result.estimate, ms } : result }));
+      const figures: Figures = result.ok ? { ok: true, estimate: result.estimate, ms } : result;
+      // A guess not shown (yet) is kept aside: the drop that shows it shows its figures with it.
+      if (job?.guess && job.doc !== shown.current) {
+        if (guessed.current?.doc === job.doc) guessed.current.answer = { seq: s, figures };
+        return;
+      }
+      setLive((prev) => (s < prev.seq ? prev : { seq: s, job, figures }));
     };
     // Drawn in the worker's own message task: a task React scheduled after it would wait behind
     // the frames the browser draws first after a drop, and the new figures with it.
@@ -152,6 +167,7 @@ export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSo
   }, [rates, send]);
 
   useEffect(() => {
+    shown.current = doc;
     if (!rates) return;
     const job = { doc, tuning: { pitchHz, temperatureC } };
     const w = worker.current;
@@ -171,16 +187,48 @@ export function useFigures(doc: SchemeDocument, tuning: Tuning, source: FigureSo
    */
   const ahead = useCallback(
     (upcoming: SchemeDocument) => {
+      shown.current = upcoming;
       const w = worker.current;
-      if (w) request(w, { doc: upcoming, tuning: tuningRef.current });
+      if (!w) return;
+      const job = { doc: upcoming, tuning: tuningRef.current };
+      const g = guessed.current;
+      if (g?.doc === upcoming) {
+        guessed.current = null;
+        // Worked out while the stop was dragged: shown with the drop, in the same frame.
+        if (g.answer) {
+          const { seq: s, figures } = g.answer;
+          asked.current = job;
+          setLive((prev) => (s < prev.seq ? prev : { seq: s, job, figures }));
+          return;
+        }
+        // Still in the worker: its answer is shown when it comes.
+        for (const j of jobs.current.values()) if (j.doc === upcoming) j.guess = false;
+        if (sameJob(asked.current, upcoming, job.tuning)) return;
+      }
+      request(w, job);
     },
     [request],
   );
 
-  if (source.kind === "fixed") return { figures: source.figures, stale: false, ahead };
+  /**
+   * Asks for the figures of a document that may be shown soon (where a dragged stop would land), so
+   * that if it is, its figures are ready. They are not shown unless it is (ahead with the very same
+   * document); a later guess replaces an earlier one.
+   */
+  const guess = useCallback(
+    (candidate: SchemeDocument) => {
+      const w = worker.current;
+      if (!w || guessed.current?.doc === candidate) return;
+      guessed.current = { doc: candidate, answer: null };
+      request(w, { doc: candidate, tuning: tuningRef.current, guess: true });
+    },
+    [request],
+  );
+
+  if (source.kind === "fixed") return { figures: source.figures, stale: false, ahead, guess };
   const shownFor = live.job;
   const stale = live.figures === null || !sameJob(shownFor, doc, tuning);
-  return { figures: live.figures, stale, ahead };
+  return { figures: live.figures, stale, ahead, guess };
 }
 
 export function drawingRulesOf(source: FigureSource): DrawingRules {

@@ -95,6 +95,52 @@ test("a designer drafts a scheme in the browser, moves a stop with the keyboard,
   expect(names).toEqual([["Great", ["Open Diapason"]], ["Pedal", ["Bourdon", "Trumpet"]]]);
 });
 
+test("a stop dragged with the mouse lands where the line shows, and the drop shows its figures at once", async ({ page }) => {
+  const designer = await makeUser("designer");
+  const { projectId, schemeId } = await projectWithScheme(designer, smallDocument("Scheme A"));
+  await openAs(page, designer, schemePath(projectId, schemeId));
+  const figures = page.getByTestId("figures");
+  await expect(figures).toHaveAttribute("data-state", "ok");
+  await expect(figures).not.toHaveAttribute("data-stale", /.*/);
+  const twelfth = page.locator('[data-stop-id="gt-12"]');
+  await expect(twelfth).toContainText("61 pipes");
+  const pipesBefore = Number((await page.getByTestId("fig-pipes").textContent())!.replace(/\D/g, ""));
+
+  // Pressed, carried over the Pedal's column in small steps, the line showing where it would go.
+  const grip = twelfth.getByRole("button", { name: "Move Twelfth 2⅔′" });
+  const from = (await grip.boundingBox())!;
+  const to = (await page.getByTestId("division-Pedal").locator("ol").boundingBox())!;
+  await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
+  await page.mouse.down();
+  for (let i = 1; i <= 15; i++) await page.mouse.move(from.x + ((to.x + to.width / 2 - from.x) * i) / 15, from.y + ((to.y + to.height - 4 - from.y) * i) / 15);
+  await expect(page.getByTestId("division-Pedal").getByTestId("drop-line")).toBeVisible();
+  await expect(twelfth).toHaveAttribute("data-dragging", "");
+  // While it is carried the figures stay those of the scheme as it stands.
+  await expect(figures).not.toHaveAttribute("data-stale", /.*/);
+  await page.waitForTimeout(400);
+
+  // What the first frame after the release shows: the figures of where it landed, not marked stale.
+  await page.evaluate(() => {
+    document.addEventListener(
+      "pointerup",
+      () => requestAnimationFrame(() => {
+        const f = document.querySelector('[data-testid="figures"]')!;
+        (window as unknown as { __atDrop: unknown }).__atDrop = { stale: f.hasAttribute("data-stale"), pipes: document.querySelector('[data-testid="fig-pipes"]')!.textContent };
+      }),
+      { capture: true, once: true },
+    );
+  });
+  await page.mouse.up();
+  const moved = page.getByTestId("division-Pedal").locator('[data-stop-id="gt-12"]');
+  await expect(moved).toContainText("32 pipes");
+  await expect(page.getByTestId("last-edit")).toHaveText("Moved Twelfth 2⅔′ from the Great to the Pedal");
+  await expect(page.locator("[data-dragging]")).toHaveCount(0);
+  const atDrop = await page.evaluate(() => (window as unknown as { __atDrop: { stale: boolean; pipes: string } }).__atDrop);
+  expect(atDrop).toEqual({ stale: false, pipes: String(pipesBefore - 61 + 32) });
+  await expect(page.getByTestId("fig-pipes")).toHaveText(String(pipesBefore - 61 + 32));
+  await expectSaved(page, 2);
+});
+
 test.describe("two designers save the same scheme", () => {
   async function twoEditors(browser: import("@playwright/test").Browser) {
     const first = await makeUser("designer");
