@@ -5,6 +5,7 @@
  * edit elsewhere (with 150 stops, a move redraws two columns, not six).
  */
 import { useState } from "react";
+import type { DrawingUnits } from "@/lib/drawing/units";
 import { chestWords, fitState, type FitState } from "./chest-words";
 import type { Figures } from "./use-figures";
 
@@ -28,7 +29,8 @@ export function pipesWords(p: StopPipes | undefined): string {
   return `${p.total} ${p.total === 1 ? "pipe" : "pipes"}`;
 }
 
-export function columnFiguresOf(figures: Figures | null): Map<string, ColumnFigures> {
+/** Per division, with the chest in the firm's drawing units. */
+export function columnFiguresOf(figures: Figures | null, units: DrawingUnits = "mm"): Map<string, ColumnFigures> {
   const out = new Map<string, ColumnFigures>();
   if (!figures?.ok) return out;
   for (const d of figures.estimate.divisions) {
@@ -40,7 +42,7 @@ export function columnFiguresOf(figures: Figures | null): Map<string, ColumnFigu
       pipesTotal: d.pipes.total,
       fit: fitState(d.chest.fit, hasChest),
       hasChest,
-      words: chestWords(d.chest.main, d.chest.space, d.chest.fit),
+      words: chestWords(d.chest.main, d.chest.space, d.chest.fit, units),
       pipesText,
     });
   }
@@ -70,11 +72,11 @@ export function keepUnchanged(before: ReadonlyMap<string, ColumnFigures>, after:
 }
 
 /** Column figures that keep their identity while their content is the same (React's "information from previous renders"). */
-export function useColumnFigures(figures: Figures | null): Map<string, ColumnFigures> {
-  const [kept, setKept] = useState(() => ({ figures, map: columnFiguresOf(figures) }));
-  if (kept.figures !== figures) {
-    const map = keepUnchanged(kept.map, columnFiguresOf(figures));
-    setKept({ figures, map });
+export function useColumnFigures(figures: Figures | null, units: DrawingUnits): Map<string, ColumnFigures> {
+  const [kept, setKept] = useState(() => ({ figures, units, map: columnFiguresOf(figures, units) }));
+  if (kept.figures !== figures || kept.units !== units) {
+    const map = keepUnchanged(kept.map, columnFiguresOf(figures, units));
+    setKept({ figures, units, map });
     return map;
   }
   return kept.map;

@@ -6,7 +6,8 @@ import { StateMark } from "@/components/ui/state-mark";
 // the editor's first scripts, which the browser runs only in the figures worker.
 import { departmentLabels, departments } from "@/lib/estimate/departments";
 import { materialLabels } from "./format";
-import { chestWords, fitState } from "./chest-words";
+import { lengthUnitLabel, type DrawingUnits } from "@/lib/drawing/units";
+import { chestWords, fitState, lengthNumber } from "./chest-words";
 import { formatMoney, formatNumber } from "./format";
 import type { Figures } from "./use-figures";
 
@@ -27,7 +28,7 @@ function Row({ label, value, strong = false, testId }: { label: string; value: s
  * while they are behind the document they are marked "updating", and before the first arrive the
  * panel says it is working them out.
  */
-export const FiguresPanel = memo(function FiguresPanel({ figures, showMoney, stale = false }: { figures: Figures | null; showMoney: boolean; stale?: boolean }) {
+export const FiguresPanel = memo(function FiguresPanel({ figures, showMoney, units, stale = false }: { figures: Figures | null; showMoney: boolean; units: DrawingUnits; stale?: boolean }) {
   if (!figures) {
     return (
       <section className="panel p-3 text-sm" data-testid="figures" aria-labelledby="figures-heading" data-state="pending" data-stale="true" aria-busy="true">
@@ -56,7 +57,7 @@ export const FiguresPanel = memo(function FiguresPanel({ figures, showMoney, sta
         <h2 id="figures-heading" className="flex-1 text-lg font-semibold">Figures</h2>
         <span className={`text-xs ${stale ? "text-caution" : "text-tin"}`} title="Computed in the browser on every change">{stale ? "updating…" : "live"}</span>
       </div>
-      <FiguresBody figures={figures} showMoney={showMoney} />
+      <FiguresBody figures={figures} showMoney={showMoney} units={units} />
     </section>
   );
 });
@@ -65,7 +66,7 @@ export const FiguresPanel = memo(function FiguresPanel({ figures, showMoney, sta
  * The figures themselves. Memoised apart from the panel's frame: an edit marks the figures stale at
  * once (the frame's "updating…"), which draws no figure again until the new ones arrive.
  */
-const FiguresBody = memo(function FiguresBody({ figures, showMoney }: { figures: Extract<Figures, { ok: true }>; showMoney: boolean }) {
+const FiguresBody = memo(function FiguresBody({ figures, showMoney, units }: { figures: Extract<Figures, { ok: true }>; showMoney: boolean; units: DrawingUnits }) {
   const e = figures.estimate;
   const t = e.totals;
   const clashes = e.divisions.filter((d) => d.chest.fit && !d.chest.fit.fits);
@@ -101,8 +102,8 @@ const FiguresBody = memo(function FiguresBody({ figures, showMoney }: { figures:
                   <StateMark kind={state} className={`mt-px ${state === "fit" ? "text-fit" : state === "unknown" ? "text-tin" : ""}`} />
                   <span>
                     <strong className="font-semibold text-ink">{d.name}</strong>{" "}
-                    {d.chest.main.rows > 0 ? chestWords(d.chest.main, d.chest.space, d.chest.fit) : "no pipes on a chest."}
-                    {d.chest.offset && <> Offset chest {formatNumber(Math.round(d.chest.offset.lengthMm))} × {formatNumber(Math.round(d.chest.offset.depthMm))} mm.</>}
+                    {d.chest.main.rows > 0 ? chestWords(d.chest.main, d.chest.space, d.chest.fit, units) : "no pipes on a chest."}
+                    {d.chest.offset && <> Offset chest {lengthNumber(d.chest.offset.lengthMm, units)} × {lengthNumber(d.chest.offset.depthMm, units)} {lengthUnitLabel(units)}.</>}
                   </span>
                 </li>
               );

@@ -68,7 +68,8 @@ export function SchemeEditor({
   const save = useSchemeSave({ scheme: initialScheme, present: doc, label: history.label, enabled: editable });
   const { saveNow } = save;
   const { figures, stale, ahead, guess } = useFigures(doc, initialScheme.tuning, figureSource);
-  const columnFigures = useColumnFigures(figures);
+  const drawingUnits = drawingRulesOf(figureSource).drawingUnits;
+  const columnFigures = useColumnFigures(figures, drawingUnits);
   const [figuresOpen, setFiguresOpen] = useState(false);
   const [tab, setTab] = useState<Tab>("stops");
   const [editing, setEditing] = useState<Editing>(null);
@@ -367,7 +368,7 @@ export function SchemeEditor({
           )}
           {showFigures && (
             <div className="hidden lg:block">
-              <FiguresPanel figures={figures} showMoney={showMoney} stale={stale} />
+              <FiguresPanel figures={figures} showMoney={showMoney} units={drawingUnits} stale={stale} />
             </div>
           )}
         </div>
@@ -384,7 +385,7 @@ export function SchemeEditor({
             </button>
           </div>
           <Dialog open={figuresOpen} onClose={() => setFiguresOpen(false)} title="Figures" wide>
-            {figuresOpen && <FiguresPanel figures={figures} showMoney={showMoney} stale={stale} />}
+            {figuresOpen && <FiguresPanel figures={figures} showMoney={showMoney} units={drawingUnits} stale={stale} />}
           </Dialog>
         </>
       )}

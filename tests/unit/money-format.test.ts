@@ -31,7 +31,7 @@ describe("the one money formatter", () => {
     const parsed = parseSchemeFile(file, { ...DEFAULT_RATES, currency: "GBP" });
     if (!parsed.ok) throw new Error(parsed.messages.join("; "));
     const estimate = estimateScheme(parsed.scheme, { ...parsed.rates, currency: "GBP" });
-    const html = renderToStaticMarkup(createElement(FiguresPanel, { figures: { ok: true, estimate, ms: 1 }, showMoney: true }));
+    const html = renderToStaticMarkup(createElement(FiguresPanel, { figures: { ok: true, estimate, ms: 1 }, showMoney: true, units: "mm" }));
     const text = html.replace(/<[^<>]*>/g, "|");
     for (const amount of [estimate.money.labourAmount, estimate.money.materialsAmount, estimate.money.totalAmount]) {
       expect(text).toContain(`${currencySymbol("GBP")}${formatAmount(amount)}`);
