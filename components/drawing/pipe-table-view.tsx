@@ -10,7 +10,13 @@ import { lengthDecimals, lengthIn, lengthUnitLabel, weightIn, weightUnitLabel, t
 import { Caution, leadCaution } from "@/components/ui/caution";
 import { noteText } from "@/components/spec/format";
 
-const nf = (x: number, dp: number) => x.toLocaleString("en-GB", { minimumFractionDigits: dp, maximumFractionDigits: dp });
+// One formatter per number of decimals: toLocaleString with options builds a new one for every cell.
+const fixedFormats = new Map<number, Intl.NumberFormat>();
+function nf(x: number, dp: number): string {
+  let format = fixedFormats.get(dp);
+  if (!format) fixedFormats.set(dp, (format = new Intl.NumberFormat("en-GB", { minimumFractionDigits: dp, maximumFractionDigits: dp })));
+  return format.format(x);
+}
 
 export function PipeTableView({ table, units, rules }: { table: PipeTable; units: DrawingUnits; rules: GeometryRules }) {
   const L = lengthUnitLabel(units);

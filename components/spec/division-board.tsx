@@ -292,7 +292,8 @@ export const DivisionBoard = memo(function DivisionBoard({
       if (carried.type === "division") {
         const from = doc.divisions.findIndex((d) => d.id === carried.id);
         const to = carried.doc.divisions.findIndex((d) => d.id === carried.id);
-        if (from >= 0 && to >= 0 && from !== to) onChange(moveDivision(doc, from, to), `Moved the ${doc.divisions[from].name}`);
+        // The carried document itself, as for a stop: its figures were guessed while it was carried.
+        if (from >= 0 && to >= 0 && from !== to) onChange(carried.doc, `Moved the ${doc.divisions[from].name}`);
       } else commitStop(carried.id, carried.doc);
     } else if (key === "Escape" || key === "Tab") {
       if (key === "Escape") e.preventDefault();

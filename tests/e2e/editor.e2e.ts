@@ -139,6 +139,14 @@ test("a stop dragged with the mouse lands where the line shows, and the drop sho
   expect(atDrop).toEqual({ stale: false, pipes: String(pipesBefore - 61 + 32) });
   await expect(page.getByTestId("fig-pipes")).toHaveText(String(pipesBefore - 61 + 32));
   await expectSaved(page, 2);
+
+  // A division carried with the keyboard: the Pedal before the Great, the figures unchanged.
+  await keyboardMove(page, "Move division Pedal", ["ArrowLeft"]);
+  await expect(page.getByTestId("last-edit")).toHaveText("Moved the Pedal");
+  await expect(page.locator("section[data-division-id]").first()).toHaveAttribute("data-testid", "division-Pedal");
+  await expect(figures).not.toHaveAttribute("data-stale", /.*/);
+  await expect(page.getByTestId("fig-pipes")).toHaveText(String(pipesBefore - 61 + 32));
+  await expectSaved(page, 3);
 });
 
 test.describe("two designers save the same scheme", () => {
