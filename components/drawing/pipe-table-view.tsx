@@ -8,21 +8,13 @@ import { sizeClassLabels } from "@/lib/estimate/departments";
 import { pipeStateLabels, type PipeTable } from "@/lib/drawing/pipe-table";
 import { lengthDecimals, lengthIn, lengthUnitLabel, weightIn, weightUnitLabel, type DrawingUnits } from "@/lib/drawing/units";
 import { Caution, leadCaution } from "@/components/ui/caution";
-import { noteText } from "@/components/spec/format";
-
-// One formatter per number of decimals: toLocaleString with options builds a new one for every cell.
-const fixedFormats = new Map<number, Intl.NumberFormat>();
-function nf(x: number, dp: number): string {
-  let format = fixedFormats.get(dp);
-  if (!format) fixedFormats.set(dp, (format = new Intl.NumberFormat("en-GB", { minimumFractionDigits: dp, maximumFractionDigits: dp })));
-  return format.format(x);
-}
+import { formatFixed, noteText } from "@/components/spec/format";
 
 export function PipeTableView({ table, units, rules }: { table: PipeTable; units: DrawingUnits; rules: GeometryRules }) {
   const L = lengthUnitLabel(units);
   const W = weightUnitLabel(units);
-  const len = (mm: number | null) => (mm === null ? "–" : nf(lengthIn(units, mm), lengthDecimals(units, mm)));
-  const thin = (mm: number | null) => (mm === null ? "–" : nf(lengthIn(units, mm), units === "mm" ? 2 : 3));
+  const len = (mm: number | null) => (mm === null ? "–" : formatFixed(lengthIn(units, mm), lengthDecimals(units, mm)));
+  const thin = (mm: number | null) => (mm === null ? "–" : formatFixed(lengthIn(units, mm), units === "mm" ? 2 : 3));
   const t = table.totals;
   const reeds = table.rows.some((r) => r.resonatorLengthMm !== null);
   const wood = table.rows.some((r) => r.wood);
@@ -39,8 +31,8 @@ export function PipeTableView({ table, units, rules }: { table: PipeTable; units
           {table.rows.length} {table.rows.length === 1 ? "pipe" : "pipes"} listed{ranks > 1 ? ` in ${ranks} ranks` : ""}
           {states.length > 0 && ` — ${states.map((k) => `${t.byState[k]} ${pipeStateLabels[k]}`).join(", ")}`}
           {" · "}in the organ: {t.inOrgan} pipes
-          {table.rows.some((r) => !r.wood) && `, metal ${nf(weightIn(units, t.metalKg), 1)} ${W}`}
-          {t.woodM3 > 0 && `, timber ${nf(t.woodM3 * 1000, 1)} litres`}
+          {table.rows.some((r) => !r.wood) && `, metal ${formatFixed(weightIn(units, t.metalKg), 1)} ${W}`}
+          {t.woodM3 > 0 && `, timber ${formatFixed(t.woodM3 * 1000, 1)} litres`}
           {t.onOffsetChest > 0 && ` · ${t.onOffsetChest} on an offset chest`}
         </p>
       </header>
@@ -73,7 +65,7 @@ export function PipeTableView({ table, units, rules }: { table: PipeTable; units
                 {ranks > 1 && <td className="px-2 py-1">{r.rank}</td>}
                 <td className={`px-2 py-1 font-medium ${keySticky} bg-paper-card`}>{noteText(r.key)}</td>
                 <td className="px-2 py-1">{noteText(r.sounds)} <span className="text-tin">{r.footage}′</span></td>
-                <td className="px-2 py-1 text-right">{nf(r.frequencyHz, r.frequencyHz < 100 ? 2 : 1)}</td>
+                <td className="px-2 py-1 text-right">{formatFixed(r.frequencyHz, r.frequencyHz < 100 ? 2 : 1)}</td>
                 <td className="px-2 py-1 text-right">{len(r.speakingLengthMm)}</td>
                 {reeds && <td className="px-2 py-1 text-right">{len(r.resonatorLengthMm)}</td>}
                 <td className="px-2 py-1 text-right">{r.wood ? <span title="inside side of a wooden pipe">□ {len(r.insideSideMm)}</span> : len(r.diameterMm)}</td>
@@ -81,7 +73,7 @@ export function PipeTableView({ table, units, rules }: { table: PipeTable; units
                 <td className="px-2 py-1 text-right">{len(r.cutUpMm)}</td>
                 <td className="px-2 py-1 text-right">{len(r.footLengthMm)}</td>
                 <td className="px-2 py-1 text-right">{thin(r.thicknessMm)}</td>
-                <td className="px-2 py-1 text-right">{r.wood ? `${nf(r.woodM3 * 1000, 2)} l` : nf(weightIn(units, r.metalKg), 2)}</td>
+                <td className="px-2 py-1 text-right">{r.wood ? `${formatFixed(r.woodM3 * 1000, 2)} l` : formatFixed(weightIn(units, r.metalKg), 2)}</td>
                 <td className="whitespace-nowrap px-2 py-1">{sizeClassLabels[r.sizeClass]}</td>
                 <td className="whitespace-nowrap px-2 py-1">{pipeStateLabels[r.state]}</td>
                 <td className="px-2 py-1">{r.onOffsetChest ? "offset" : "main"}</td>

@@ -220,8 +220,9 @@ export function windText(w: { value: number; unit: "mm" | "in" }): string {
   return w.unit === "in" ? `${formatNumber(w.value, 2)} in w.g.` : `${formatNumber(w.value, 0)} mm w.g.`;
 }
 
-// One formatter per number of digits: toLocaleString with options builds a new Intl.NumberFormat
-// on every call (about 0.1 ms each in Chromium), which the figures panel did hundreds of times a drop.
+// One formatter per number of digits (here and in formatFixed): toLocaleString with options builds a
+// new Intl.NumberFormat on every call (about 0.1 ms each in Chromium), which the figures panel did
+// hundreds of times a drop.
 const numberFormats = new Map<number, Intl.NumberFormat>();
 
 /** Numbers with a thin space between thousands, as drawings give them: 3 420. */
@@ -230,6 +231,15 @@ export function formatNumber(n: number, digits = 0): string {
   let format = numberFormats.get(digits);
   if (!format) numberFormats.set(digits, (format = new Intl.NumberFormat("en-GB", { minimumFractionDigits: 0, maximumFractionDigits: digits })));
   return format.format(n).replace(/,/g, "\u202f");
+}
+
+const fixedFormats = new Map<number, Intl.NumberFormat>();
+
+/** Exactly `digits` decimals with commas between thousands, as the pipe table gives its measurements: 1,234.50. */
+export function formatFixed(n: number, digits: number): string {
+  let format = fixedFormats.get(digits);
+  if (!format) fixedFormats.set(digits, (format = new Intl.NumberFormat("en-GB", { minimumFractionDigits: digits, maximumFractionDigits: digits })));
+  return format.format(n);
 }
 
 export function formatMm(n: number): string {

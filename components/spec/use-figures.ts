@@ -82,7 +82,7 @@ export function useFigures(
   /** The document shown, or about to be (ahead): answers for a guess of another are kept aside. */
   const shown = useRef<SchemeDocument>(doc);
   /** The latest guess and, once the worker has answered, its figures (with the answer's sequence number). */
-  const guessed = useRef<{ doc: SchemeDocument; answer: { seq: number; figures: Figures } | null } | null>(null);
+  const guessed = useRef<{ job: Job; answer: { seq: number; figures: Figures } | null } | null>(null);
   const tuningRef = useRef<Tuning>({ pitchHz, temperatureC });
   useEffect(() => {
     tuningRef.current = { pitchHz, temperatureC };
@@ -132,7 +132,7 @@ export function useFigures(
       const figures: Figures = result.ok ? { ok: true, estimate: result.estimate, ms } : result;
       // A guess not shown (yet) is kept aside: the drop that shows it shows its figures with it.
       if (job?.guess && job.doc !== shown.current) {
-        if (guessed.current?.doc === job.doc) guessed.current.answer = { seq: s, figures };
+        if (guessed.current?.job === job) guessed.current.answer = { seq: s, figures };
         return;
       }
       setLive((prev) => (s < prev.seq ? prev : { seq: s, job, figures }));
@@ -192,19 +192,16 @@ export function useFigures(
       if (!w) return;
       const job = { doc: upcoming, tuning: tuningRef.current };
       const g = guessed.current;
-      if (g?.doc === upcoming) {
-        guessed.current = null;
-        // Worked out while the stop was dragged: shown with the drop, in the same frame.
-        if (g.answer) {
-          const { seq: s, figures } = g.answer;
-          asked.current = job;
-          setLive((prev) => (s < prev.seq ? prev : { seq: s, job, figures }));
-          return;
-        }
-        // Still in the worker: its answer is shown when it comes.
-        for (const j of jobs.current.values()) if (j.doc === upcoming) j.guess = false;
-        if (sameJob(asked.current, upcoming, job.tuning)) return;
+      guessed.current = null;
+      // Worked out while the stop was dragged: shown with the drop, in the same frame.
+      if (g?.answer && sameJob(g.job, upcoming, job.tuning)) {
+        const { seq: s, figures } = g.answer;
+        asked.current = job;
+        setLive((prev) => (s < prev.seq ? prev : { seq: s, job: g.job, figures }));
+        return;
       }
+      // A guess still in the worker is not asked for again (request), and its answer is shown when
+      // it comes, for its document is the one shown now.
       request(w, job);
     },
     [request],
@@ -218,9 +215,10 @@ export function useFigures(
   const guess = useCallback(
     (candidate: SchemeDocument) => {
       const w = worker.current;
-      if (!w || guessed.current?.doc === candidate) return;
-      guessed.current = { doc: candidate, answer: null };
-      request(w, { doc: candidate, tuning: tuningRef.current, guess: true });
+      if (!w || guessed.current?.job.doc === candidate) return;
+      const job = { doc: candidate, tuning: tuningRef.current, guess: true };
+      guessed.current = { job, answer: null };
+      request(w, job);
     },
     [request],
   );
